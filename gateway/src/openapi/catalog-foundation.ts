@@ -1,0 +1,59 @@
+import { z } from 'zod';
+import { MeResponse, LoginRequest, RefreshRequest, SessionResponse } from '../../../shared/api/auth.js';
+import { Animal, AnimalListQuery, AnimalPage, CreateAnimalRequest, UpdateAnimalRequest } from '../../../shared/api/animals.js';
+import { IdParams } from '../../../shared/api/common.js';
+import { CreateCustomerRequest, Customer, CustomerListQuery, CustomerPage, UpdateCustomerRequest } from '../../../shared/api/customers.js';
+import { HealthResponse } from '../../../shared/api/health.js';
+import { MailListQuery, MailMessage, MailPage } from '../../../shared/api/mail.js';
+import { CreateTubModelRequest, TubModel, TubModelListQuery, TubModelPage, UpdateTubModelRequest } from '../../../shared/api/tub-models.js';
+import { CreateUserRequest, UpdateUserRequest, User, UserListQuery, UserPage } from '../../../shared/api/users.js';
+import { documentRoutes, type RouteDoc } from './route-catalog.js';
+
+type Resource = {
+  path: string;
+  tag: string;
+  noun: string;
+  item: z.ZodType;
+  page: z.ZodType;
+  listQuery: z.ZodObject;
+  create: z.ZodType;
+  update: z.ZodType;
+  read: string[];
+  write: string[];
+  deletable?: boolean;
+};
+
+/** The five routes of a plain business table (list, read, create, update, soft delete). */
+function resourceDocs(r: Resource): RouteDoc[] {
+  const docs: RouteDoc[] = [
+    { method: 'get', path: `/api/v1/${r.path}`, tag: r.tag, summary: `List ${r.noun}s`, roles: r.read, query: r.listQuery, success: { status: 200, schema: r.page, description: 'One page' } },
+    { method: 'get', path: `/api/v1/${r.path}/:id`, tag: r.tag, summary: `Read one ${r.noun}`, roles: r.read, params: IdParams, success: { status: 200, schema: r.item, description: r.noun }, errors: [404] },
+    { method: 'post', path: `/api/v1/${r.path}`, tag: r.tag, summary: `Create a ${r.noun}`, roles: r.write, body: r.create, success: { status: 201, schema: r.item, description: 'Created' }, errors: [409] },
+    { method: 'patch', path: `/api/v1/${r.path}/:id`, tag: r.tag, summary: `Change a ${r.noun}`, roles: r.write, params: IdParams, body: r.update, success: { status: 200, schema: r.item, description: 'Changed' }, errors: [404] },
+  ];
+  if (r.deletable !== false) {
+    docs.push({ method: 'delete', path: `/api/v1/${r.path}/:id`, tag: r.tag, summary: `Remove a ${r.noun} (kept in history)`, roles: r.write, params: IdParams, success: { status: 204, description: 'Removed' }, errors: [404] });
+  }
+  return docs;
+}
+
+documentRoutes(
+  { method: 'get', path: '/api/v1/health', tag: 'system', summary: 'Health of the gateway and every service', roles: [], success: { status: 200, schema: HealthResponse, description: 'Health report' } },
+  {
+    method: 'post', path: '/api/v1/auth/login', tag: 'auth', summary: 'Sign in with e-mail and password', roles: [], body: LoginRequest,
+    bodyExample: { email: 'owner@demo.tubwright.test', password: 'tubwright-demo' },
+    success: { status: 200, schema: SessionResponse, description: 'A new session' }, errors: [429],
+    description: 'Attempts are rate-limited per address and account.',
+  },
+  { method: 'post', path: '/api/v1/auth/refresh', tag: 'auth', summary: 'Exchange a refresh token for a new session', roles: [], body: RefreshRequest, success: { status: 200, schema: SessionResponse, description: 'A new session' }, errors: [429] },
+  { method: 'get', path: '/api/v1/auth/me', tag: 'auth', summary: 'The signed-in user', roles: ['owner', 'builder', 'keeper', 'sales'], success: { status: 200, schema: MeResponse, description: 'The user' } },
+  { method: 'get', path: '/api/v1/users', tag: 'users', summary: 'List users', roles: ['owner'], query: UserListQuery, success: { status: 200, schema: UserPage, description: 'One page' } },
+  { method: 'get', path: '/api/v1/users/:id', tag: 'users', summary: 'Read one user', roles: ['owner'], params: IdParams, success: { status: 200, schema: User, description: 'The user' }, errors: [404] },
+  { method: 'post', path: '/api/v1/users', tag: 'users', summary: 'Create a user with a role', roles: ['owner'], body: CreateUserRequest, success: { status: 201, schema: User, description: 'Created' }, errors: [409] },
+  { method: 'patch', path: '/api/v1/users/:id', tag: 'users', summary: 'Change role, name, password or deactivate', roles: ['owner'], params: IdParams, body: UpdateUserRequest, success: { status: 200, schema: User, description: 'Changed' }, errors: [404, 422] },
+  ...resourceDocs({ path: 'tub-models', tag: 'tub models', noun: 'tub model', item: TubModel, page: TubModelPage, listQuery: TubModelListQuery, create: CreateTubModelRequest, update: UpdateTubModelRequest, read: ['owner', 'builder', 'sales'], write: ['owner', 'builder'] }),
+  ...resourceDocs({ path: 'animals', tag: 'animals', noun: 'animal', item: Animal, page: AnimalPage, listQuery: AnimalListQuery, create: CreateAnimalRequest, update: UpdateAnimalRequest, read: ['owner', 'keeper', 'sales'], write: ['owner', 'keeper'] }),
+  ...resourceDocs({ path: 'customers', tag: 'customers', noun: 'customer', item: Customer, page: CustomerPage, listQuery: CustomerListQuery, create: CreateCustomerRequest, update: UpdateCustomerRequest, read: ['owner', 'sales'], write: ['owner', 'sales'] }),
+  { method: 'get', path: '/api/v1/mail/messages', tag: 'mail', summary: 'Messages caught by the local mail catcher', roles: ['owner'], query: MailListQuery, success: { status: 200, schema: MailPage, description: 'One page' } },
+  { method: 'get', path: '/api/v1/mail/messages/:id', tag: 'mail', summary: 'Read one caught message', roles: ['owner'], params: IdParams, success: { status: 200, schema: MailMessage, description: 'The message' }, errors: [404] },
+);

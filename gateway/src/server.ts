@@ -1,0 +1,23 @@
+import { loadConfig } from '../../services/common/src/config.js';
+import { listen } from '../../services/common/src/listen.js';
+import { createGatewayApp } from './app.js';
+
+const config = loadConfig();
+const url = (port: number) => `http://${config.host}:${port}`;
+await listen(
+  createGatewayApp({
+    calculatorUrl: url(config.calculatorPort),
+    recordsUrl: url(config.recordsPort),
+    mailUrl: url(config.mailHttpPort),
+    paymentsUrl: url(config.paymentsPort),
+    webDir: config.webDir,
+    jwtSecret: config.jwtSecret,
+    internalSecret: config.internalSecret,
+    accessTokenTtlS: config.accessTokenTtlS,
+    refreshTokenTtlS: config.refreshTokenTtlS,
+    loginRateLimitPerMinute: config.loginRateLimitPerMinute,
+  }),
+  config.host,
+  config.gatewayPort,
+  'gateway',
+);

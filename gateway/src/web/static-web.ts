@@ -1,0 +1,33 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import express, { Router } from 'express';
+
+export const ELEMENT_NAMES = ['planning', 'collection', 'orders', 'rack-sizer'] as const;
+
+/**
+ * The console (shell) at /, each module element under /elements/<name>/. Paths that are not
+ * files fall back to the shell's index.html so deep links and reloads work.
+ */
+export function staticWeb(webDir: string): Router {
+  const router = Router();
+  for (const name of ELEMENT_NAMES) {
+    router.use(`/elements/${name}`, express.static(path.join(webDir, name), { fallthrough: false, maxAge: '5m' }));
+  }
+  const shellDir = path.join(webDir, 'shell');
+  router.use(express.static(shellDir, { index: false, maxAge: '1h', setHeaders: noCacheForHtml }));
+  router.get('/{*path}', (req, res, next) => {
+    if (req.path.startsWith('/api/') || path.extname(req.path)) return next();
+    const index = path.join(shellDir, 'index.html');
+    if (!fs.existsSync(index)) {
+      res.status(503).type('text').send('The console is not built yet: run `npm run build` (npm start does it for you).');
+      return;
+    }
+    res.setHeader('cache-control', 'no-cache');
+    res.sendFile(index);
+  });
+  return router;
+}
+
+function noCacheForHtml(res: express.Response, file: string): void {
+  if (file.endsWith('.html')) res.setHeader('cache-control', 'no-cache');
+}
