@@ -129,3 +129,22 @@ describe('login rate limit', () => {
     }
   });
 });
+
+describe('calculations through the gateway', () => {
+  it('routes rack plans and pairing outcomes to the calculator over HTTP', async () => {
+    const token = (await signIn('builder@demo.tubwright.test')).body.accessToken;
+    const plan = await request(stack.app)
+      .post('/api/v1/calc/rack-plan')
+      .set(bearer(token))
+      .send({ tub: { length: 23, width: 16.25, height: 6.5, loadedMass: 4.5 }, layout: { levels: 9, columns: 3 } });
+    expect(plan.status).toBe(200);
+    expect(plan.body.dimensions.outerShelfLength - plan.body.dimensions.interiorShelfLength).toBe(1);
+    const keeper = (await signIn('keeper@demo.tubwright.test')).body.accessToken;
+    const outcomes = await request(stack.app)
+      .post('/api/v1/genetics/pairing-outcomes')
+      .set(bearer(keeper))
+      .send({ traits: [{ name: 'amber', mode: 'recessive' }], sire: { amber: 'het' }, dam: { amber: 'het' } });
+    expect(outcomes.status).toBe(200);
+    expect(outcomes.body.outcomes.map((o: { fraction: string }) => o.fraction).sort()).toEqual(['1/2', '1/4', '1/4']);
+  });
+});

@@ -59,7 +59,7 @@ export function createGatewayApp(deps: GatewayDeps): express.Express {
   // Everything under /api/v1 past this point needs a signed-in user.
   app.use('/api/v1', bearerAuth(tokens));
 
-  app.use(serviceProxy({ name: 'calculator', url: deps.calculatorUrl, paths: ['/api/v1/calc/**'] }, deps.internalSecret));
+  app.use(serviceProxy({ name: 'calculator', url: deps.calculatorUrl, paths: ['/api/v1/calc/**', '/api/v1/genetics/**'] }, deps.internalSecret));
   app.use(serviceProxy({ name: 'mail', url: deps.mailUrl, paths: ['/api/v1/mail/**'] }, deps.internalSecret));
   app.use(serviceProxy({ name: 'records', url: deps.recordsUrl, paths: ['/api/v1/**'] }, deps.internalSecret));
 

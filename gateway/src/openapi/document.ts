@@ -2,6 +2,8 @@ import { OpenApiGeneratorV31, OpenAPIRegistry } from '@asteasolutions/zod-to-ope
 import type { OpenAPIV3_1 } from 'openapi-types';
 import { ErrorResponse } from '../../../shared/api/common.js';
 import './catalog-foundation.js';
+import './catalog-calculator.js';
+import './catalog-genetics.js';
 import { routes, type RouteDoc } from './route-catalog.js';
 
 const STATUS_TEXT: Record<number, string> = {

@@ -1,6 +1,8 @@
 import express from 'express';
 import { errorHandler, notFoundHandler } from '../../common/src/error-handler.js';
 import { requireGatewayIdentity } from '../../common/src/internal-identity.js';
+import { geneticsRoutes } from './http/genetics-routes.js';
+import { rackPlanRoutes } from './http/rack-plan-routes.js';
 
 export interface CalculatorDeps {
   internalSecret: string;
@@ -15,6 +17,8 @@ export function createApp({ internalSecret }: CalculatorDeps): express.Express {
   });
   app.use(requireGatewayIdentity(internalSecret));
   app.use(express.json({ limit: '1mb' }));
+  app.use(rackPlanRoutes());
+  app.use(geneticsRoutes());
   app.use(notFoundHandler);
   app.use(errorHandler());
   return app;
