@@ -35,6 +35,7 @@ export function createGatewayApp(deps: GatewayDeps): express.Express {
   });
 
   const tokens = new TokenService(deps.jwtSecret, deps.accessTokenTtlS, deps.refreshTokenTtlS);
+  const bearer = bearerAuth(tokens);
   const services = {
     calculator: new ServiceClient(deps.calculatorUrl, deps.internalSecret),
     records: new ServiceClient(deps.recordsUrl, deps.internalSecret),
@@ -56,8 +57,13 @@ export function createGatewayApp(deps: GatewayDeps): express.Express {
 
   app.use(authRoutes(services.records, tokens, deps.loginRateLimitPerMinute));
 
-  // Everything under /api/v1 past this point needs a signed-in user.
-  app.use('/api/v1', bearerAuth(tokens));
+  // The payment provider signs its webhook itself; the records service checks that signature.
+  app.post('/api/v1/payments/webhook', (req, _res, next) => {
+    req.identity = { kind: 'gateway', sub: 'payments-webhook', role: 'system', iat: 0 };
+    next('route');
+  });
+  // Everything else under /api/v1 past this point needs a signed-in user.
+  app.use('/api/v1', (req, res, next) => (req.identity ? next() : bearer(req, res, next)));
 
   app.use(serviceProxy({ name: 'calculator', url: deps.calculatorUrl, paths: ['/api/v1/calc/**', '/api/v1/genetics/**'] }, deps.internalSecret));
   app.use(serviceProxy({ name: 'mail', url: deps.mailUrl, paths: ['/api/v1/mail/**'] }, deps.internalSecret));

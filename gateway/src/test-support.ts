@@ -37,7 +37,7 @@ export async function gatewayTestStack(overrides: Partial<GatewayDeps> = {}) {
   });
   const close = async () => {
     for (const s of [recordsHttp, calculatorHttp, mailHttp]) await new Promise((r) => s.server.close(r));
-    await records.db.destroy();
+    await records.close();
   };
   return { app, db: records.db, mailStore, close };
 }

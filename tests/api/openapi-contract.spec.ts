@@ -20,7 +20,7 @@ describe('the OpenAPI document covers every public route', () => {
     const gateway = await gatewayTestStack();
     served.push(...listRoutes(gateway.app).filter(isPublic));
     await gateway.close();
-    await records.db.destroy();
+    await records.close();
     const missing = served.filter((r) => !documented().has(r));
     expect(missing).toEqual([]);
     // and nothing documented that no service answers

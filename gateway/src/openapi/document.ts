@@ -4,6 +4,9 @@ import { ErrorResponse } from '../../../shared/api/common.js';
 import './catalog-foundation.js';
 import './catalog-calculator.js';
 import './catalog-genetics.js';
+import './catalog-plans.js';
+import './catalog-collection.js';
+import './catalog-orders.js';
 import { routes, type RouteDoc } from './route-catalog.js';
 
 const STATUS_TEXT: Record<number, string> = {

@@ -24,6 +24,8 @@ export interface Config {
   stripeWebhookSecret: string;
   /** Where the payments stand-in delivers its signed events. */
   paymentsWebhookUrl: string;
+  /** Sender of the shop's e-mail. */
+  mailFrom: string;
 }
 
 type Env = Record<string, string | undefined>;
@@ -69,6 +71,7 @@ export function loadConfig(env: Env = process.env, root = process.cwd()): Config
     loginRateLimitPerMinute: positiveInt(env, 'LOGIN_RATE_LIMIT_PER_MINUTE', 10),
     stripeSecretKey: env.STRIPE_SECRET_KEY || 'sk_test_tubwright_local',
     stripeWebhookSecret: env.STRIPE_WEBHOOK_SECRET || 'whsec_tubwright_local',
+    mailFrom: env.MAIL_FROM || 'Tubwright shop <shop@demo.tubwright.test>',
     paymentsWebhookUrl: env.PAYMENTS_WEBHOOK_URL || `http://${host}:${gatewayPort}/api/v1/payments/webhook`,
   };
 }

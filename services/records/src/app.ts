@@ -1,19 +1,30 @@
 import express from 'express';
 import type { Knex } from 'knex';
+import type Stripe from 'stripe';
 import { errorHandler, notFoundHandler } from '../../common/src/error-handler.js';
 import { requireGatewayIdentity } from '../../common/src/internal-identity.js';
 import { animalsRoutes } from './animals/animals-routes.js';
+import type { CalculatorClient } from './lib/calculator-client.js';
+import type { Mailer } from './lib/mailer.js';
+import { collectionRoutes } from './collection/collection-routes.js';
 import { customersRoutes } from './customers/customers-routes.js';
+import { ordersRoutes } from './orders/orders-routes.js';
+import { plansRoutes } from './plans/plans-routes.js';
 import { tubModelsRoutes } from './tub-models/tub-models-routes.js';
 import { internalAuthRoutes, usersRoutes } from './users/users-routes.js';
 
 export interface RecordsDeps {
   db: Knex;
   internalSecret: string;
+  /** Plans are computed by the calculator service over HTTP. */
+  calculator: CalculatorClient;
+  mailer: Mailer;
+  payments: { client: Stripe; webhookSecret: string };
 }
 
 /** The records service: every business record, behind the gateway only. */
-export function createApp({ db, internalSecret }: RecordsDeps): express.Express {
+export function createApp(deps: RecordsDeps): express.Express {
+  const { db, internalSecret } = deps;
   const app = express();
   app.disable('x-powered-by');
   app.set('query parser', 'simple');
@@ -24,12 +35,18 @@ export function createApp({ db, internalSecret }: RecordsDeps): express.Express 
   });
 
   app.use(requireGatewayIdentity(internalSecret));
+  // Areas that need the raw body or multipart (payment webhooks, uploads) mount before the JSON parser.
+  app.use(ordersRoutes(deps, 'raw'));
+  app.use(collectionRoutes(deps, 'raw'));
   app.use(express.json({ limit: '256kb' }));
   app.use(internalAuthRoutes(db));
   app.use(usersRoutes(db));
   app.use(tubModelsRoutes(db));
   app.use(animalsRoutes(db));
   app.use(customersRoutes(db));
+  app.use(plansRoutes(deps));
+  app.use(collectionRoutes(deps, 'json'));
+  app.use(ordersRoutes(deps, 'json'));
   app.use(notFoundHandler);
   app.use(errorHandler());
   return app;

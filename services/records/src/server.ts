@@ -2,9 +2,22 @@ import { loadConfig } from '../../common/src/config.js';
 import { listen } from '../../common/src/listen.js';
 import { createApp } from './app.js';
 import { migrateLatest, openDatabase } from './db/knex.js';
+import { CalculatorClient } from './lib/calculator-client.js';
+import { Mailer } from './lib/mailer.js';
+import { createPaymentsClient } from './lib/payments.js';
 
 const config = loadConfig();
 const db = openDatabase(config.databaseFile);
 await migrateLatest(db);
-const server = await listen(createApp({ db, internalSecret: config.internalSecret }), config.host, config.recordsPort, 'records');
+const app = createApp({
+  db,
+  internalSecret: config.internalSecret,
+  calculator: new CalculatorClient(`http://${config.host}:${config.calculatorPort}`, config.internalSecret),
+  mailer: new Mailer({ host: config.host, port: config.smtpPort }, config.mailFrom),
+  payments: {
+    client: createPaymentsClient({ secretKey: config.stripeSecretKey, webhookSecret: config.stripeWebhookSecret, host: config.host, port: config.paymentsPort }),
+    webhookSecret: config.stripeWebhookSecret,
+  },
+});
+const server = await listen(app, config.host, config.recordsPort, 'records');
 server.on('close', () => void db.destroy());

@@ -6,7 +6,7 @@ let ctx: Awaited<ReturnType<typeof recordsTestApp>>;
 beforeAll(async () => {
   ctx = await recordsTestApp({ seed: true });
 });
-afterAll(() => ctx.db.destroy());
+afterAll(() => ctx.close());
 
 const keeper = () => asRole('keeper');
 

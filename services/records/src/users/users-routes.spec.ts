@@ -6,7 +6,7 @@ let ctx: Awaited<ReturnType<typeof recordsTestApp>>;
 beforeAll(async () => {
   ctx = await recordsTestApp({ seed: true });
 });
-afterAll(() => ctx.db.destroy());
+afterAll(() => ctx.close());
 
 describe('users and password checks', () => {
   it('refuses a request that did not come through the gateway', async () => {

@@ -1,0 +1,4 @@
+import { documentRoutes } from './route-catalog.js';
+
+// Routes of the plans area.
+documentRoutes();

@@ -1,0 +1,34 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import { gzipSync } from 'node:zlib';
+
+const KiB = 1024;
+
+export interface BundleSize {
+  name: string;
+  gzipKiB: number;
+  targetKiB: number;
+}
+
+const gz = (file: string) => gzipSync(fs.readFileSync(file), { level: 9 }).length / KiB;
+
+/** The shell's initial JavaScript is what index.html loads up front; lazy chunks are not counted. */
+function shellInitialFiles(shellDir: string): string[] {
+  const html = fs.readFileSync(path.join(shellDir, 'index.html'), 'utf8');
+  const scripts = [...html.matchAll(/<script[^>]+src="([^"]+\.js)"/g)].map((m) => m[1]!);
+  const preloads = [...html.matchAll(/<link[^>]+rel="modulepreload"[^>]+href="([^"]+\.js)"/g)].map((m) => m[1]!);
+  return [...new Set([...scripts, ...preloads])].map((src) => path.join(shellDir, src.replace(/^\//, '')));
+}
+
+export function bundleSizes(webDir: string): BundleSize[] {
+  const shellDir = path.join(webDir, 'shell');
+  const sizes: BundleSize[] = [
+    { name: 'shell (initial JS)', gzipKiB: shellInitialFiles(shellDir).reduce((sum, f) => sum + gz(f), 0), targetKiB: 150 },
+  ];
+  for (const name of ['planning', 'collection', 'orders', 'rack-sizer']) {
+    const dir = path.join(webDir, name);
+    const js = fs.readdirSync(dir).filter((f) => f.endsWith('.js'));
+    sizes.push({ name: `${name} element (all JS)`, gzipKiB: js.reduce((sum, f) => sum + gz(path.join(dir, f)), 0), targetKiB: 200 });
+  }
+  return sizes.map((s) => ({ ...s, gzipKiB: Math.round(s.gzipKiB * 10) / 10 }));
+}
