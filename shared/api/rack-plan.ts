@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { CuttingPlanResponse } from './cutting-plan.js';
 
 /*
  * Public contract of POST /api/v1/calc/rack-plan. Member names are relied on by integrators and
@@ -256,6 +257,14 @@ export const RackPrices = z
 
 const defaults = <T extends z.ZodType>(schema: T) => schema.default(schema.parse({}) as never);
 
+export const RackCuttingOptions = z
+  .object({
+    include: z.boolean().default(true).describe('Nest the parts onto sheets and boards and count sheets from the layouts (default true); false uses an area estimate.'),
+    timeLimitMs: z.number().int().min(50).max(10000).default(500).describe('Time allowed for the nesting search, milliseconds (default 500); the best layout found is returned with its lower bound.'),
+  })
+  .strict()
+  .describe('Cutting plan options.');
+
 export const RackPlanRequest = z
   .object({
     unit: z.enum(LENGTH_UNITS).default('in').describe('Unit of every length in the request and the response: in or mm.'),
@@ -269,6 +278,7 @@ export const RackPlanRequest = z
     joints: defaults(RackJoints),
     limits: defaults(RackLimits),
     prices: defaults(RackPrices),
+    cutting: defaults(RackCuttingOptions),
   })
   .strict()
   .superRefine((req, ctx) => {
@@ -506,6 +516,7 @@ export const RackPlanResponse = z
     checks: z.array(RackCheck),
     cost: RackCost,
     display: RackDisplay,
+    cutting: CuttingPlanResponse.optional().describe('Sheet layouts and board cut lists for every part, nested to the fewest stock pieces (see POST /api/v1/calc/cutting-plan); the cost counts these sheets.'),
   })
   .strict()
   .describe(`A complete rack plan.\n\n${RACK_PLAN_RULES}`);
