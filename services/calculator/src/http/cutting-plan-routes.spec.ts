@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
-import { CUTTING_PLAN_EXAMPLE, CuttingPlanResponse, MAX_PARTS } from '../../../../shared/api/cutting-plan.js';
+import { CUTTING_PLAN_EXAMPLE, CuttingPlanRequest, CuttingPlanResponse, MAX_PARTS } from '../../../../shared/api/cutting-plan.js';
 import { RACK_PLAN_EXAMPLE, RackPlanResponse } from '../../../../shared/api/rack-plan.js';
 import { checkPlan } from '../domain/cutting/layout-checker.js';
 import { createApp } from '../app.js';
@@ -15,7 +15,7 @@ describe('POST /api/v1/calc/cutting-plan', () => {
     const res = await post('/api/v1/calc/cutting-plan', CUTTING_PLAN_EXAMPLE);
     expect(res.status).toBe(200);
     expect(CuttingPlanResponse.safeParse(res.body).success).toBe(true);
-    expect(checkPlan(CUTTING_PLAN_EXAMPLE, res.body)).toEqual([]);
+    expect(checkPlan(CuttingPlanRequest.parse(CUTTING_PLAN_EXAMPLE), res.body)).toEqual([]);
   });
 
   it('answers 422 naming a part larger than every stock, 400 for a part without stock, 413 past the part limit', async () => {
