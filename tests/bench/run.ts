@@ -1,0 +1,91 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { RACK_PLAN_EXAMPLE } from '../../shared/api/rack-plan.js';
+import { loadConfig } from '../../services/common/src/config.js';
+import { buildWeb } from '../../scripts/build-web.js';
+import { prepareDatabase } from '../../scripts/lib/database.js';
+import { ROOT, startAll } from '../../scripts/lib/processes.js';
+import { bundleSizes } from './bundle-sizes.js';
+import { runCuttingBench } from './cutting.js';
+import { moduleTimings } from './module-timing.js';
+import { rackPlanInProcess } from './rack-plan.js';
+import { measure, startBareServer } from './throughput.js';
+
+/**
+ * `npm run bench`: the figures the issues ask for, measured on this machine in one run.
+ * Not part of `npm test`; results go to tests/bench/results/latest.json.
+ */
+const only = process.argv.slice(2);
+const wants = (name: string) => only.length === 0 || only.includes(name);
+const results: Record<string, unknown> = { machine: { cpus: os.cpus().length, cpu: os.cpus()[0]?.model, node: process.version }, at: new Date().toISOString() };
+const log = (line: string) => console.log(line);
+
+if (wants('rack')) {
+  log('\n== Rack plan, in process (72 tubs, no cutting) ==');
+  const rack = rackPlanInProcess();
+  log(`median ${rack.medianMs} ms over ${rack.runs} runs (target < 1 ms)`);
+  results.rackPlanInProcess = rack;
+}
+
+if (wants('cutting')) {
+  log('\n== Cutting ==');
+  results.cutting = runCuttingBench(log);
+}
+
+if (wants('web') || wants('http')) {
+  buildWeb();
+  const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'tubwright-bench-'));
+  const env = {
+    ...process.env, DATA_DIR: dataDir, PORT: '4500', CALCULATOR_PORT: '4501', RECORDS_PORT: '4502', SMTP_PORT: '4525',
+    MAIL_HTTP_PORT: '4526', PAYMENTS_PORT: '4510', JWT_SECRET: 'bench-jwt', INTERNAL_SECRET: 'bench-internal', LOGIN_RATE_LIMIT_PER_MINUTE: '1000',
+  };
+  const config = loadConfig(env);
+  await prepareDatabase(config.databaseFile, { seed: true });
+  const stack = await startAll(config, env, { quiet: true });
+  const base = `http://${config.host}:${config.gatewayPort}`;
+  try {
+    if (wants('web')) {
+      log('\n== Console bundles (gzip) ==');
+      const sizes = bundleSizes(path.join(ROOT, 'dist/web'));
+      for (const s of sizes) log(`${s.name.padEnd(28)} ${String(s.gzipKiB).padStart(7)} KiB (target <= ${s.targetKiB} KiB)`);
+      results.bundleSizes = sizes;
+      log('\n== Module switch in Chromium (median of 10) ==');
+      const timings = await moduleTimings(base);
+      for (const t of timings) log(`${t.module.padEnd(12)} first visit ${t.firstVisitMs} ms, return visit ${t.returnVisitMs} ms`);
+      results.moduleTimings = timings;
+    }
+    if (wants('http')) {
+      log('\n== Rack-plan route through the gateway vs a bare Express route (autocannon, 16 connections, 8 s each) ==');
+      const login = await fetch(`${base}/api/v1/auth/login`, {
+        method: 'POST', headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ email: 'builder@demo.tubwright.test', password: 'tubwright-demo' }),
+      });
+      const { accessToken } = (await login.json()) as { accessToken: string };
+      const auth = { authorization: `Bearer ${accessToken}` };
+      const bare = await startBareServer(4590);
+      try {
+        const bareRun = await measure('bare Express route (fixed JSON)', 'http://127.0.0.1:4590/bare', { levels: 9 });
+        const planRun = await measure('rack plan via gateway (no cutting)', `${base}/api/v1/calc/rack-plan`, { ...RACK_PLAN_EXAMPLE, cutting: { include: false } }, auth);
+        const cutRun = await measure('rack plan via gateway (with cutting)', `${base}/api/v1/calc/rack-plan`, RACK_PLAN_EXAMPLE, auth);
+        for (const r of [bareRun, planRun, cutRun]) {
+          log(`${r.name.padEnd(38)} ${String(r.requestsPerSecond).padStart(6)} req/s  p99 ${r.p99Ms} ms  errors ${r.errors}  non-2xx ${r.non2xx}`);
+        }
+        const ratio = planRun.requestsPerSecond / bareRun.requestsPerSecond;
+        log(`ratio (no cutting) / bare = ${(ratio * 100).toFixed(0)} % (target >= 50 %)`);
+        results.throughput = { bare: bareRun, rackPlan: planRun, rackPlanWithCutting: cutRun, ratio };
+      } finally {
+        bare.kill('SIGTERM');
+      }
+    }
+  } finally {
+    await stack.stop();
+    fs.rmSync(dataDir, { recursive: true, force: true });
+  }
+}
+
+const outDir = path.join(ROOT, 'tests/bench/results');
+fs.mkdirSync(outDir, { recursive: true });
+fs.writeFileSync(path.join(outDir, 'latest.json'), JSON.stringify(results, null, 2));
+log(`\nWrote tests/bench/results/latest.json`);
+process.exit(0);

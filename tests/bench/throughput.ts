@@ -1,0 +1,38 @@
+import { spawn, type ChildProcess } from 'node:child_process';
+import autocannon from 'autocannon';
+import { ROOT } from '../../scripts/lib/processes.js';
+
+export interface Throughput {
+  name: string;
+  requestsPerSecond: number;
+  p99Ms: number;
+  errors: number;
+  non2xx: number;
+}
+
+/** A bounded autocannon run on loopback: fixed duration and connections, stops by itself. */
+export async function measure(name: string, url: string, body: unknown, headers: Record<string, string> = {}, seconds = 8): Promise<Throughput> {
+  const result = await autocannon({
+    url,
+    method: 'POST',
+    connections: 16,
+    duration: seconds,
+    headers: { 'content-type': 'application/json', ...headers },
+    body: JSON.stringify(body),
+  });
+  return {
+    name,
+    requestsPerSecond: Math.round(result.requests.average),
+    p99Ms: result.latency.p99,
+    errors: result.errors,
+    non2xx: result.non2xx,
+  };
+}
+
+export function startBareServer(port: number): Promise<ChildProcess> {
+  const child = spawn(process.execPath, ['--import', 'tsx', 'tests/bench/bare-server.ts', String(port)], { cwd: ROOT, stdio: ['ignore', 'pipe', 'inherit'] });
+  return new Promise((resolve, reject) => {
+    child.stdout!.once('data', () => resolve(child));
+    child.once('exit', (code) => reject(new Error(`bare server exited ${code}`)));
+  });
+}
