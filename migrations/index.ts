@@ -1,5 +1,9 @@
 import type { Knex } from 'knex';
 import * as foundation from './20261202_001_foundation.js';
+import * as plans from './20261202_002_plans.js';
+import * as collection from './20261202_003_collection.js';
+import * as orders from './20261202_004_orders.js';
+import * as apiKeys from './20261202_005_api_keys.js';
 
 /**
  * Migrations are listed here rather than read from the folder, so tsx, vitest and compiled
@@ -7,6 +11,10 @@ import * as foundation from './20261202_001_foundation.js';
  */
 const migrations: Record<string, Knex.Migration> = {
   '20261202_001_foundation': foundation,
+  '20261202_002_plans': plans,
+  '20261202_003_collection': collection,
+  '20261202_004_orders': orders,
+  '20261202_005_api_keys': apiKeys,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -1,6 +1,7 @@
 import express from 'express';
 import swaggerUi from 'swagger-ui-express';
 import { errorHandler, notFoundHandler } from '../../services/common/src/error-handler.js';
+import { apiKeyAuth, apiKeyRateLimits, corsPreflight } from './auth/api-key-auth.js';
 import { authRoutes } from './auth/auth-routes.js';
 import { bearerAuth } from './auth/passport-jwt.js';
 import { TokenService } from './auth/tokens.js';
@@ -20,6 +21,8 @@ export interface GatewayDeps {
   accessTokenTtlS: number;
   refreshTokenTtlS: number;
   loginRateLimitPerMinute: number;
+  apiKeyRateLimitPerMinute?: number;
+  widgetIpRateLimitPerMinute?: number;
   version?: string;
 }
 
@@ -55,6 +58,7 @@ export function createGatewayApp(deps: GatewayDeps): express.Express {
   });
   app.use('/api/docs', swaggerUi.serve, swaggerUi.setup(openApiDocument(), { customSiteTitle: 'Tubwright API' }));
 
+  app.use(corsPreflight(services.records));
   app.use(authRoutes(services.records, tokens, deps.loginRateLimitPerMinute));
 
   // The payment provider signs its webhook itself; the records service checks that signature.
@@ -62,7 +66,8 @@ export function createGatewayApp(deps: GatewayDeps): express.Express {
     req.identity = { kind: 'gateway', sub: 'payments-webhook', role: 'system', iat: 0 };
     next('route');
   });
-  // Everything else under /api/v1 past this point needs a signed-in user.
+  // Everything else under /api/v1 needs an API key (partners, the website widget) or a signed-in user.
+  app.use('/api/v1', apiKeyAuth(services.records), ...apiKeyRateLimits(deps.apiKeyRateLimitPerMinute ?? 300, deps.widgetIpRateLimitPerMinute ?? 60));
   app.use('/api/v1', (req, res, next) => (req.identity ? next() : bearer(req, res, next)));
 
   app.use(serviceProxy({ name: 'calculator', url: deps.calculatorUrl, paths: ['/api/v1/calc/**', '/api/v1/genetics/**'] }, deps.internalSecret));

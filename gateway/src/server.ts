@@ -16,6 +16,8 @@ await listen(
     accessTokenTtlS: config.accessTokenTtlS,
     refreshTokenTtlS: config.refreshTokenTtlS,
     loginRateLimitPerMinute: config.loginRateLimitPerMinute,
+    apiKeyRateLimitPerMinute: config.apiKeyRateLimitPerMinute,
+    widgetIpRateLimitPerMinute: config.widgetIpRateLimitPerMinute,
   }),
   config.host,
   config.gatewayPort,

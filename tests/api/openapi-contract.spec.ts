@@ -62,6 +62,7 @@ describe('live responses match their documented schemas', () => {
   it('every documented GET by id answers its schema for the first listed row', async () => {
     for (const route of routes.filter((r) => r.method === 'get' && r.path.endsWith('/:id') && !r.path.includes('/mail/'))) {
       const list = await request(stack.app).get(route.path.replace('/:id', '')).set('authorization', `Bearer ${token}`);
+      expect(list.body.items?.length, `${route.path}: the demo data should hold at least one row`).toBeGreaterThan(0);
       const id = list.body.items[0].id;
       const res = await request(stack.app).get(route.path.replace(':id', String(id))).set('authorization', `Bearer ${token}`);
       const parsed = route.success.schema!.safeParse(res.body);

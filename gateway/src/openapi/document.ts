@@ -7,6 +7,7 @@ import './catalog-genetics.js';
 import './catalog-plans.js';
 import './catalog-collection.js';
 import './catalog-orders.js';
+import './catalog-api-keys.js';
 import { routes, type RouteDoc } from './route-catalog.js';
 
 const STATUS_TEXT: Record<number, string> = {

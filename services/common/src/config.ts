@@ -20,6 +20,8 @@ export interface Config {
   accessTokenTtlS: number;
   refreshTokenTtlS: number;
   loginRateLimitPerMinute: number;
+  apiKeyRateLimitPerMinute: number;
+  widgetIpRateLimitPerMinute: number;
   stripeSecretKey: string;
   stripeWebhookSecret: string;
   /** Where the payments stand-in delivers its signed events. */
@@ -69,6 +71,8 @@ export function loadConfig(env: Env = process.env, root = process.cwd()): Config
     accessTokenTtlS: positiveInt(env, 'ACCESS_TOKEN_TTL_S', 15 * 60),
     refreshTokenTtlS: positiveInt(env, 'REFRESH_TOKEN_TTL_S', 7 * 24 * 3600),
     loginRateLimitPerMinute: positiveInt(env, 'LOGIN_RATE_LIMIT_PER_MINUTE', 10),
+    apiKeyRateLimitPerMinute: positiveInt(env, 'API_KEY_RATE_LIMIT_PER_MINUTE', 300),
+    widgetIpRateLimitPerMinute: positiveInt(env, 'WIDGET_IP_RATE_LIMIT_PER_MINUTE', 60),
     stripeSecretKey: env.STRIPE_SECRET_KEY || 'sk_test_tubwright_local',
     stripeWebhookSecret: env.STRIPE_WEBHOOK_SECRET || 'whsec_tubwright_local',
     mailFrom: env.MAIL_FROM || 'Tubwright shop <shop@demo.tubwright.test>',

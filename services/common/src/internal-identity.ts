@@ -8,6 +8,8 @@ export interface Identity {
   sub: string;
   role: Role | 'integrator' | 'system';
   email?: string;
+  /** What an API key may do (integrators only). */
+  scopes?: string[];
   /** Seconds since the epoch when the gateway signed this header. */
   iat: number;
 }

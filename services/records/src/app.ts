@@ -4,6 +4,7 @@ import type Stripe from 'stripe';
 import { errorHandler, notFoundHandler } from '../../common/src/error-handler.js';
 import { requireGatewayIdentity } from '../../common/src/internal-identity.js';
 import { animalsRoutes } from './animals/animals-routes.js';
+import { apiKeysRoutes } from './api-keys/api-keys-routes.js';
 import type { CalculatorClient } from './lib/calculator-client.js';
 import type { Mailer } from './lib/mailer.js';
 import { collectionRoutes } from './collection/collection-routes.js';
@@ -20,6 +21,8 @@ export interface RecordsDeps {
   calculator: CalculatorClient;
   mailer: Mailer;
   payments: { client: Stripe; webhookSecret: string };
+  /** Where uploaded photos are kept (under the data folder). */
+  uploadsDir: string;
 }
 
 /** The records service: every business record, behind the gateway only. */
@@ -44,6 +47,7 @@ export function createApp(deps: RecordsDeps): express.Express {
   app.use(tubModelsRoutes(db));
   app.use(animalsRoutes(db));
   app.use(customersRoutes(db));
+  app.use(apiKeysRoutes(db));
   app.use(plansRoutes(deps));
   app.use(collectionRoutes(deps, 'json'));
   app.use(ordersRoutes(deps, 'json'));

@@ -1,3 +1,4 @@
+import path from 'node:path';
 import { loadConfig } from '../../common/src/config.js';
 import { listen } from '../../common/src/listen.js';
 import { createApp } from './app.js';
@@ -12,6 +13,7 @@ await migrateLatest(db);
 const app = createApp({
   db,
   internalSecret: config.internalSecret,
+  uploadsDir: path.join(config.dataDir, 'uploads'),
   calculator: new CalculatorClient(`http://${config.host}:${config.calculatorPort}`, config.internalSecret),
   mailer: new Mailer({ host: config.host, port: config.smtpPort }, config.mailFrom),
   payments: {

@@ -1,4 +1,7 @@
+import fs from 'node:fs';
 import http from 'node:http';
+import os from 'node:os';
+import path from 'node:path';
 import type { AddressInfo } from 'node:net';
 import type { Knex } from 'knex';
 import { IDENTITY_HEADER, signIdentity, type Identity } from '../../common/src/internal-identity.js';
@@ -39,6 +42,7 @@ export async function recordsTestApp(options: { seed?: boolean; webhookUrl?: str
   const app = createApp({
     db,
     internalSecret: TEST_INTERNAL_SECRET,
+    uploadsDir: fs.mkdtempSync(path.join(os.tmpdir(), 'tubwright-uploads-')),
     calculator: new CalculatorClient(`http://127.0.0.1:${calculator.port}`, TEST_INTERNAL_SECRET),
     mailer: new Mailer({ host: '127.0.0.1', port: smtpPort }, 'Test shop <shop@example.test>'),
     payments: {

@@ -1,6 +1,9 @@
 import type { Knex } from 'knex';
 import { nowIso } from '../db/knex.js';
 import { hashPassword } from '../users/passwords.js';
+import { seedCollectionDemo } from './collection-demo.js';
+import { seedOrdersDemo } from './orders-demo.js';
+import { seedPlansDemo } from './plans-demo.js';
 import { DEMO_CUSTOMERS, DEMO_PASSWORD, DEMO_SHOP, DEMO_TUB_MODELS, DEMO_USERS, demoAnimals } from './demo-data.js';
 
 const toRow = (o: Record<string, unknown>) =>
@@ -20,5 +23,9 @@ export async function seedDemoData(db: Knex): Promise<boolean> {
     await trx('animals').insert(demoAnimals().map((a) => ({ ...toRow(a), ...stamp })));
     await trx('customers').insert(DEMO_CUSTOMERS.map((c) => ({ notes: '', ...toRow(c), ...stamp })));
   });
+  // Each area seeds its own invented records on top of the people, tubs, animals and customers.
+  await seedPlansDemo(db);
+  await seedCollectionDemo(db);
+  await seedOrdersDemo(db);
   return true;
 }

@@ -1,0 +1,175 @@
+import express, { Router } from 'express';
+import type { Knex } from 'knex';
+import Stripe from 'stripe';
+import { IdParams } from '../../../../shared/api/common.js';
+import { ConfirmPaymentRequest, CreatePaymentRequest } from '../../../../shared/api/orders.js';
+import { json } from '../../../common/src/async-handler.js';
+import { ApiError, ConflictError, ForbiddenError, NotFoundError } from '../../../common/src/errors.js';
+import { allow } from '../../../common/src/roles.js';
+import { parseOrThrow } from '../../../common/src/validate.js';
+import type { RecordsDeps } from '../app.js';
+import { audit } from '../audit/audit-log.js';
+import { nowIso } from '../db/knex.js';
+import { idempotent } from './idempotency.js';
+import { notifyOrder } from './mail-notices.js';
+import { enterStage, findOrder, orderPayments, toPayment } from './orders-store.js';
+import { actorOf } from './quotes-routes.js';
+
+export const PAYMENT_ROLES = ['owner', 'sales'] as const;
+const WEBHOOK_ACTOR = 'payments-webhook';
+
+/** The provider's errors become ours: a declined card is the customer's problem (422), anything else is the provider's (502). */
+function providerError(err: unknown): ApiError {
+  if (err instanceof Stripe.errors.StripeCardError) return new ApiError(422, 'card_declined', err.message || 'The card was declined.', 'paymentMethod');
+  if (err instanceof Stripe.errors.StripeError) return new ApiError(502, 'payments_unavailable', `The payment provider refused or did not answer: ${err.message}`);
+  return new ApiError(502, 'payments_unavailable', 'The payment provider did not answer; try again in a moment.');
+}
+
+async function findPayment(db: Knex, id: number) {
+  const row = await db('payments').where({ id }).first();
+  if (!row) throw new NotFoundError(`No payment with id ${id}.`);
+  return row as Record<string, any>;
+}
+
+type ApplyOutcome = { duplicate: boolean; depositPaidOrderId: number | null };
+
+/**
+ * Applies one verified provider event exactly once: the event id is recorded in the same
+ * transaction as its effect, and a payment already succeeded is never counted twice.
+ */
+export async function applyPaymentEvent(db: Knex, event: Stripe.Event): Promise<ApplyOutcome> {
+  return db.transaction(async (trx) => {
+    if (await trx('payment_events').where({ event_id: event.id }).first()) return { duplicate: true, depositPaidOrderId: null };
+    const intent = event.data.object as Partial<Stripe.PaymentIntent> & { id: string };
+    await trx('payment_events').insert({ event_id: event.id, type: event.type, provider_id: intent.id ?? null, received_at: nowIso() });
+    const outcome: ApplyOutcome = { duplicate: false, depositPaidOrderId: null };
+    if (!event.type.startsWith('payment_intent.')) return outcome;
+    const payment = await trx('payments').where({ provider_id: intent.id }).first();
+    // Intents made elsewhere (another app on the same account) are recorded and otherwise ignored.
+    if (!payment || payment.status === 'succeeded') return outcome;
+    const now = nowIso();
+    const raw = JSON.stringify(event);
+    if (event.type === 'payment_intent.succeeded') {
+      await trx('payments').where({ id: payment.id }).update({ status: 'succeeded', paid_at: now, raw_event_json: raw, failure_message: null, updated_at: now });
+      const order = await trx('orders').where({ id: payment.order_id }).first();
+      const paid = order.paid_cents + payment.amount_cents;
+      const balance = Math.max(0, order.total_cents - paid);
+      await trx('orders').where({ id: order.id }).update({ paid_cents: paid, balance_cents: balance, updated_at: now });
+      if (order.status === 'awaiting_deposit' && paid >= order.deposit_due_cents) {
+        await enterStage(trx, order.id, 'deposit_paid', WEBHOOK_ACTOR, `Payment ${intent.id}`, now);
+        outcome.depositPaidOrderId = order.id;
+      }
+      if (balance === 0) await trx('invoices').where({ order_id: order.id, status: 'open' }).update({ status: 'paid', updated_at: now });
+    } else if (event.type === 'payment_intent.payment_failed') {
+      const message = (intent.last_payment_error as { message?: string } | null | undefined)?.message ?? 'Payment failed.';
+      await trx('payments').where({ id: payment.id }).update({ status: 'failed', failure_message: message, raw_event_json: raw, updated_at: now });
+    } else if (event.type === 'payment_intent.canceled') {
+      await trx('payments').where({ id: payment.id }).update({ status: 'canceled', raw_event_json: raw, updated_at: now });
+    }
+    return outcome;
+  });
+}
+
+/** The provider's signed webhook; needs the raw body, so it mounts before the JSON parser. */
+export function paymentWebhookRoutes(deps: RecordsDeps): Router {
+  const router = Router();
+  router.post(
+    '/api/v1/payments/webhook',
+    (req, _res, next) => next(req.identity?.role === 'system' ? undefined : new ForbiddenError('Only the payment provider posts here, through the gateway.')),
+    express.raw({ type: () => true, limit: '512kb' }),
+    json(async (req) => {
+      const signature = req.header('stripe-signature');
+      if (!signature) throw new ApiError(400, 'invalid_signature', 'The stripe-signature header is missing.', 'stripe-signature');
+      let event: Stripe.Event;
+      try {
+        event = deps.payments.client.webhooks.constructEvent(Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0), signature, deps.payments.webhookSecret);
+      } catch {
+        throw new ApiError(400, 'invalid_signature', 'The webhook signature does not match this body; nothing was changed.', 'stripe-signature');
+      }
+      const outcome = await applyPaymentEvent(deps.db, event);
+      if (outcome.depositPaidOrderId !== null) {
+        await audit(deps.db, req.identity, 'deposit_paid', 'order', outcome.depositPaidOrderId, { event: event.id });
+        await notifyOrder(deps.db, deps.mailer, 'deposit_received', await findOrder(deps.db, outcome.depositPaidOrderId));
+      }
+      return { received: true as const, duplicate: outcome.duplicate };
+    }),
+  );
+  return router;
+}
+
+/** Deposits and balances through the provider's SDK; the webhook, not the browser, marks them paid. */
+export function paymentsRoutes(deps: RecordsDeps): Router {
+  const { db } = deps;
+  const router = Router();
+
+  router.get(
+    '/api/v1/orders/:id/payments',
+    allow(...PAYMENT_ROLES),
+    json(async (req) => {
+      const { id } = parseOrThrow(IdParams, req.params);
+      await findOrder(db, id);
+      return { items: await orderPayments(db, id) };
+    }),
+  );
+
+  router.post(
+    '/api/v1/orders/:id/payments',
+    allow(...PAYMENT_ROLES),
+    json(async (req, res) => {
+      const { id } = parseOrThrow(IdParams, req.params);
+      const body = parseOrThrow(CreatePaymentRequest, req.body ?? {});
+      const order = await findOrder(db, id);
+      return idempotent(db, req, res, async () => {
+        if (order.status === 'cancelled' || order.status === 'closed') throw new ConflictError(`Order ${order.number} is ${order.status}; it takes no payments.`);
+        const amountCents = body.kind === 'deposit' ? order.depositDueCents - order.paidCents : order.balanceCents;
+        if (amountCents <= 0) throw new ConflictError(body.kind === 'deposit' ? `The deposit of order ${order.number} is already paid.` : `Order ${order.number} owes nothing.`, 'kind');
+        let intent: Stripe.PaymentIntent;
+        try {
+          intent = await deps.payments.client.paymentIntents.create({
+            amount: amountCents,
+            currency: order.currency,
+            description: `${body.kind === 'deposit' ? 'Deposit' : 'Balance'} for order ${order.number}`,
+            metadata: { order_id: String(order.id), order_number: order.number, kind: body.kind },
+          });
+        } catch (err) {
+          throw providerError(err);
+        }
+        const now = nowIso();
+        const [paymentId] = await db('payments').insert({
+          order_id: id,
+          provider_id: intent.id,
+          kind: body.kind,
+          amount_cents: amountCents,
+          currency: order.currency,
+          status: 'pending',
+          created_by: actorOf(req),
+          created_at: now,
+          updated_at: now,
+        });
+        await audit(db, req.identity, 'create', 'payment', paymentId!, { orderId: id, kind: body.kind, amountCents, providerId: intent.id });
+        return { status: 201, body: { ...toPayment(await findPayment(db, paymentId!)), clientSecret: intent.client_secret } };
+      });
+    }),
+  );
+
+  router.post(
+    '/api/v1/payments/:id/confirm',
+    allow(...PAYMENT_ROLES),
+    json(async (req) => {
+      const { id } = parseOrThrow(IdParams, req.params);
+      const { paymentMethod } = parseOrThrow(ConfirmPaymentRequest, req.body ?? {});
+      const payment = await findPayment(db, id);
+      if (payment.status === 'succeeded' || payment.status === 'canceled') throw new ConflictError(`Payment ${id} is ${payment.status}.`);
+      try {
+        await deps.payments.client.paymentIntents.confirm(payment.provider_id, { payment_method: paymentMethod });
+      } catch (err) {
+        throw providerError(err);
+      }
+      await audit(db, req.identity, 'confirm', 'payment', id, { paymentMethod });
+      // The status shown is what the provider's events have applied so far.
+      return toPayment(await findPayment(db, id));
+    }),
+  );
+
+  return router;
+}
