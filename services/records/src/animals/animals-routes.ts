@@ -2,7 +2,7 @@ import type { Knex } from 'knex';
 import { Animal, AnimalListQuery, CreateAnimalRequest, UpdateAnimalRequest } from '../../../../shared/api/animals.js';
 import { resourceRoutes } from '../lib/resource-routes.js';
 
-/** The collection: keepers look after the animals; sales may read (to offer what is for sale). */
+/** The collection: keepers look after the animals; sales see only the animals offered for sale. */
 export function animalsRoutes(db: Knex) {
   return resourceRoutes(db, {
     path: 'animals',
@@ -15,6 +15,7 @@ export function animalsRoutes(db: Knex) {
     write: ['owner', 'keeper'],
     listQuery: AnimalListQuery,
     filterFields: ['status', 'sex'],
+    visibleTo: (rows, who) => (who.role === 'sales' ? rows.where('for_sale', true) : rows),
     create: CreateAnimalRequest,
     update: UpdateAnimalRequest,
   });

@@ -74,7 +74,12 @@ describe('business tables (animals, tub models, customers)', () => {
   it('enforces each table\'s roles', async () => {
     expect((await request(ctx.app).get('/api/v1/customers').set(keeper())).status).toBe(403);
     expect((await request(ctx.app).get('/api/v1/animals').set(asRole('builder'))).status).toBe(403);
-    expect((await request(ctx.app).get('/api/v1/animals').set(asRole('sales'))).status).toBe(200);
+    const offered = await request(ctx.app).get('/api/v1/animals').set(asRole('sales'));
+    expect(offered.status).toBe(200);
+    const forSale = await ctx.db('animals').where({ for_sale: true }).whereNull('deleted_at').count({ n: '*' }).first();
+    // sales see exactly the animals offered for sale, not the whole collection
+    expect(offered.body.total).toBe(Number(forSale!.n));
+    expect(offered.body.total).toBeLessThan(40);
     expect((await request(ctx.app).post('/api/v1/animals').set(asRole('sales')).send({ code: 'S', species: 'x' })).status).toBe(403);
     expect((await request(ctx.app).get('/api/v1/tub-models').set(asRole('sales'))).status).toBe(200);
     expect((await request(ctx.app).post('/api/v1/tub-models').set(asRole('sales')).send({})).status).toBe(403);

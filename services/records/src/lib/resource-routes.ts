@@ -4,6 +4,7 @@ import type { z } from 'zod';
 import { IdParams } from '../../../../shared/api/common.js';
 import { json } from '../../../common/src/async-handler.js';
 import { NotFoundError } from '../../../common/src/errors.js';
+import type { Identity } from '../../../common/src/internal-identity.js';
 import { allow, type Access } from '../../../common/src/roles.js';
 import { parseOrThrow } from '../../../common/src/validate.js';
 import { audit } from '../audit/audit-log.js';
@@ -40,6 +41,8 @@ export interface ResourceSpec {
   filterFields?: readonly string[];
   create: z.ZodType<Record<string, unknown>>;
   update: z.ZodType<Record<string, unknown>>;
+  /** Narrows what a caller may see, e.g. sales see only animals offered for sale. */
+  visibleTo?: (rows: Knex.QueryBuilder, identity: Identity) => Knex.QueryBuilder;
   /** Values to coerce when reading a row (SQLite has no boolean). */
   fromRow?: (item: Record<string, unknown>) => Record<string, unknown>;
 }
@@ -56,9 +59,12 @@ export function resourceRoutes(db: Knex, spec: ResourceSpec): Router {
     const item = rowToItem<Record<string, unknown>>(row, spec.fields);
     return spec.fromRow ? spec.fromRow(item) : item;
   };
-  const live = () => db(spec.table).whereNull('deleted_at');
-  const findLive = async (id: number) => {
-    const row = await live().where({ id }).first();
+  const live = (identity?: Identity) => {
+    const rows = db(spec.table).whereNull('deleted_at');
+    return identity && spec.visibleTo ? spec.visibleTo(rows, identity) : rows;
+  };
+  const findLive = async (id: number, identity?: Identity) => {
+    const row = await live(identity).where({ id }).first();
     if (!row) throw new NotFoundError(`No ${spec.entity} with id ${id}.`);
     return row as Record<string, unknown>;
   };
@@ -68,7 +74,7 @@ export function resourceRoutes(db: Knex, spec: ResourceSpec): Router {
     allow(...spec.read),
     json(async (req) => {
       const query = parseOrThrow(spec.listQuery, req.query, 'query');
-      let rows = live();
+      let rows = live(req.identity);
       for (const field of spec.filterFields ?? []) if (query[field] !== undefined) rows = rows.where(toSnake(field), query[field]);
       return listPage(rows, query, {
         columns,
@@ -82,7 +88,7 @@ export function resourceRoutes(db: Knex, spec: ResourceSpec): Router {
   router.get(
     `${base}/:id`,
     allow(...spec.read),
-    json(async (req) => toItem(await findLive(parseOrThrow(IdParams, req.params).id))),
+    json(async (req) => toItem(await findLive(parseOrThrow(IdParams, req.params).id, req.identity))),
   );
 
   router.post(
