@@ -269,7 +269,7 @@ export const InvoiceListQuery = listQuery(['number', 'issuedOn', 'dueOn', 'total
 // ---------------------------------------------------------------------------------------------
 // Mail log
 
-export const MAIL_KINDS = ['quote_sent', 'order_accepted', 'deposit_received', 'order_ready', 'order_delivered', 'invoice_issued'] as const;
+export const MAIL_KINDS = ['quote_sent', 'order_accepted', 'deposit_received', 'order_ready', 'order_delivered', 'invoice_issued', 'quote_request_received', 'quote_request_confirmation'] as const;
 export const MailLogEntry = z.object({
   id: z.number().int(),
   to: z.string(),

@@ -14,17 +14,19 @@ let dataDir = '';
 /** The whole product on its own ports and a throw-away database, as `npm start` runs it. */
 export async function setup(project: TestProject): Promise<void> {
   ensureChromium();
-  buildWeb();
+  // E2E_SKIP_BUILD serves dist/web as it is (a developer who just built one project); E2E_PORT_BASE moves the stack (two runs side by side).
+  if (!process.env['E2E_SKIP_BUILD']) buildWeb();
+  const base = Number(process.env['E2E_PORT_BASE'] ?? 44);
   dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'tubwright-e2e-'));
   const env = {
     ...process.env,
     DATA_DIR: dataDir,
-    PORT: '4400',
-    CALCULATOR_PORT: '4401',
-    RECORDS_PORT: '4402',
-    SMTP_PORT: '4425',
-    MAIL_HTTP_PORT: '4426',
-    PAYMENTS_PORT: '4410',
+    PORT: `${base}00`,
+    CALCULATOR_PORT: `${base}01`,
+    RECORDS_PORT: `${base}02`,
+    SMTP_PORT: `${base}25`,
+    MAIL_HTTP_PORT: `${base}26`,
+    PAYMENTS_PORT: `${base}10`,
     JWT_SECRET: 'e2e-jwt-secret',
     INTERNAL_SECRET: 'e2e-internal-secret',
   };

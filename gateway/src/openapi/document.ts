@@ -8,6 +8,7 @@ import './catalog-plans.js';
 import './catalog-collection.js';
 import './catalog-orders.js';
 import './catalog-api-keys.js';
+import './catalog-quote-requests.js';
 import { routes, type RouteDoc } from './route-catalog.js';
 
 const STATUS_TEXT: Record<number, string> = {

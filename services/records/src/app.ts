@@ -11,6 +11,7 @@ import { collectionRoutes } from './collection/collection-routes.js';
 import { customersRoutes } from './customers/customers-routes.js';
 import { ordersRoutes } from './orders/orders-routes.js';
 import { plansRoutes } from './plans/plans-routes.js';
+import { quoteRequestsRoutes } from './quote-requests/quote-requests-routes.js';
 import { tubModelsRoutes } from './tub-models/tub-models-routes.js';
 import { internalAuthRoutes, usersRoutes } from './users/users-routes.js';
 
@@ -51,6 +52,7 @@ export function createApp(deps: RecordsDeps): express.Express {
   app.use(plansRoutes(deps));
   app.use(collectionRoutes(deps, 'json'));
   app.use(ordersRoutes(deps, 'json'));
+  app.use(quoteRequestsRoutes(deps));
   app.use(notFoundHandler);
   app.use(errorHandler());
   return app;

@@ -1,0 +1,44 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { AuthSession, NavigateDetail, provideTubwrightIcons } from '@tubwright/kit';
+import { PlanningElement } from './planning-element';
+
+describe('PlanningElement', () => {
+  beforeEach(() => {
+    localStorage.clear();
+    TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting(), provideTubwrightIcons()] });
+  });
+
+  it('lists tub models for the path it is given and takes over the shell session', async () => {
+    const fixture = TestBed.createComponent(PlanningElement);
+    fixture.componentRef.setInput('path', '?q=deep&offset=25');
+    fixture.componentRef.setInput('session', {
+      accessToken: 'from-shell',
+      refreshToken: 'r',
+      expiresIn: 900,
+      user: { id: 2, email: 'builder@example.test', name: 'B', role: 'builder' },
+    });
+    await fixture.whenStable();
+
+    const request = TestBed.inject(HttpTestingController).expectOne((r) => r.url === '/api/v1/tub-models');
+    expect(request.request.params.get('q')).toBe('deep');
+    expect(request.request.params.get('offset')).toBe('25');
+    expect(TestBed.inject(AuthSession).accessToken()).toBe('from-shell');
+  });
+
+  it('asks the shell to navigate with a bubbling tw-navigate event', async () => {
+    const fixture = TestBed.createComponent(PlanningElement);
+    fixture.componentRef.setInput('path', 'no/such/page');
+    await fixture.whenStable();
+
+    const received: NavigateDetail[] = [];
+    const listener = (event: Event) => received.push((event as CustomEvent<NavigateDetail>).detail);
+    document.body.addEventListener('tw-navigate', listener);
+    document.body.appendChild(fixture.nativeElement);
+    (fixture.nativeElement as HTMLElement).querySelector('button')?.click();
+    document.body.removeEventListener('tw-navigate', listener);
+
+    expect(received).toEqual([{ path: '', replace: false }]);
+  });
+});
