@@ -10,6 +10,7 @@ export default defineConfig({
       'shared/**/*.spec.ts',
       'tests/reference/**/*.spec.ts',
       'tests/api/**/*.spec.ts',
+      'tests/durability/**/*.spec.ts', 'tests/security/**/*.spec.ts',
     ],
     environment: 'node',
     pool: 'forks',

@@ -27,10 +27,10 @@ export async function up(knex: Knex): Promise<void> {
     t.increments('id');
     t.string('name').notNullable();
     t.string('maker').notNullable().defaultTo('');
-    t.float('length_in').notNullable();
-    t.float('width_in').notNullable();
-    t.float('height_in').notNullable();
-    t.float('volume_qt');
+    t.double('length_in').notNullable();
+    t.double('width_in').notNullable();
+    t.double('height_in').notNullable();
+    t.double('volume_qt');
     t.text('notes').notNullable().defaultTo('');
     t.string('deleted_at');
     timestamps(t);

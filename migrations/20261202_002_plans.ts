@@ -45,7 +45,7 @@ export async function up(knex: Knex): Promise<void> {
     t.string('key').primary();
     t.string('label').notNullable();
     t.string('unit').notNullable();
-    t.float('price').notNullable();
+    t.double('price').notNullable();
     t.string('category').notNullable();
     t.text('notes').notNullable().defaultTo('');
     timestamps(t);
@@ -56,14 +56,14 @@ export async function up(knex: Knex): Promise<void> {
     t.string('key').notNullable().unique();
     t.string('label').notNullable();
     t.string('kind').notNullable();
-    t.float('thickness_in').notNullable();
-    t.float('density_kg_m3').notNullable();
-    t.float('modulus_mpa').notNullable();
-    t.float('heated_modulus_mpa').nullable();
+    t.double('thickness_in').notNullable();
+    t.double('density_kg_m3').notNullable();
+    t.double('modulus_mpa').notNullable();
+    t.double('heated_modulus_mpa').nullable();
     t.text('source').notNullable().defaultTo('');
-    t.float('price_per_sheet').notNullable();
-    t.float('sheet_length_in').notNullable();
-    t.float('sheet_width_in').notNullable();
+    t.double('price_per_sheet').notNullable();
+    t.double('sheet_length_in').notNullable();
+    t.double('sheet_width_in').notNullable();
     timestamps(t);
   });
 }

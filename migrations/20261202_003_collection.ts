@@ -60,7 +60,7 @@ export async function up(knex: Knex): Promise<void> {
     t.integer('animal_id').notNullable().references('id').inTable('animals');
     t.integer('trait_id').notNullable().references('id').inTable('traits');
     t.string('state').notNullable();
-    t.float('het_probability');
+    t.double('het_probability');
     timestamps(t);
     t.unique(['animal_id', 'trait_id']);
   });
@@ -117,8 +117,8 @@ export async function up(knex: Knex): Promise<void> {
     t.string('laid_on').notNullable();
     t.integer('fertile_eggs').notNullable();
     t.integer('slugs').notNullable().defaultTo(0);
-    t.float('incubation_temp_f');
-    t.float('humidity_pct');
+    t.double('incubation_temp_f');
+    t.double('humidity_pct');
     t.string('expected_hatch_from').notNullable();
     t.string('expected_hatch_to').notNullable();
     t.string('hatched_on');
@@ -132,8 +132,8 @@ export async function up(knex: Knex): Promise<void> {
     t.increments('id');
     t.integer('rack_id').notNullable().references('id').inTable('racks');
     t.string('taken_at').notNullable();
-    t.float('temp_f');
-    t.float('humidity_pct');
+    t.double('temp_f');
+    t.double('humidity_pct');
     t.string('probe').notNullable();
     t.string('source').notNullable().defaultTo('manual');
     t.string('created_by').notNullable().defaultTo('');
@@ -163,8 +163,10 @@ export async function up(knex: Knex): Promise<void> {
 }
 
 export async function down(knex: Knex): Promise<void> {
+  // Tables that point at animals go first: SQLite drops a column by rebuilding the table, which
+  // its foreign-key check refuses while rows still point at it.
+  for (const table of TABLES) await knex.schema.dropTableIfExists(table);
   await knex.schema.alterTable('animals', (t) => {
     for (const column of ANIMAL_COLUMNS) t.dropColumn(column);
   });
-  for (const table of TABLES) await knex.schema.dropTableIfExists(table);
 }

@@ -38,7 +38,7 @@ export async function up(knex: Knex): Promise<void> {
     t.integer('quote_id').notNullable().references('id').inTable('quotes').onDelete('CASCADE');
     t.integer('position').notNullable();
     t.string('kind').notNullable();
-    t.string('description').notNullable();
+    t.text('description').notNullable();
     t.integer('plan_id');
     t.text('spec_json');
     t.integer('quantity').notNullable();
@@ -90,7 +90,7 @@ export async function up(knex: Knex): Promise<void> {
     t.integer('amount_cents').notNullable();
     t.string('currency', 3).notNullable();
     t.string('status').notNullable();
-    t.string('failure_message');
+    t.text('failure_message');
     t.string('paid_at');
     t.text('raw_event_json');
     t.string('created_by').notNullable().defaultTo('');
@@ -127,7 +127,7 @@ export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable('mail_log', (t) => {
     t.increments('id');
     t.string('to').notNullable();
-    t.string('subject').notNullable();
+    t.text('subject').notNullable();
     t.string('kind').notNullable();
     t.integer('customer_id');
     t.string('entity').notNullable();
@@ -135,7 +135,7 @@ export async function up(knex: Knex): Promise<void> {
     t.string('message_id');
     t.string('sent_at').notNullable();
     t.string('status').notNullable();
-    t.string('error');
+    t.text('error');
     timestamps(t);
     t.index(['customer_id']);
     t.index(['entity', 'entity_id']);

@@ -4,6 +4,7 @@ import * as plans from './20261202_002_plans.js';
 import * as collection from './20261202_003_collection.js';
 import * as orders from './20261202_004_orders.js';
 import * as apiKeys from './20261202_005_api_keys.js';
+import * as sessions from './20261202_006_sessions.js';
 
 /**
  * Migrations are listed here rather than read from the folder, so tsx, vitest and compiled
@@ -15,6 +16,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202_003_collection': collection,
   '20261202_004_orders': orders,
   '20261202_005_api_keys': apiKeys,
+  '20261202_006_sessions': sessions,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

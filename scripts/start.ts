@@ -11,7 +11,7 @@ const env = { ...process.env, ...localSecrets(baseConfig.dataDir, process.env) }
 const config = loadConfig(env);
 
 buildWeb();
-const { applied, seeded } = await prepareDatabase(config.databaseFile, { seed: true });
+const { applied, seeded } = await prepareDatabase(config.databaseUrl, { seed: true });
 if (applied.length) console.log(`Migrations applied: ${applied.join(', ')}`);
 if (seeded) console.log('Demo data seeded.');
 

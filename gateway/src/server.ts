@@ -6,7 +6,9 @@ const config = loadConfig();
 const url = (port: number) => `http://${config.host}:${port}`;
 await listen(
   createGatewayApp({
-    calculatorUrl: url(config.calculatorPort),
+    calculatorUrl: config.calculatorUrls[0]!,
+    calculatorUrls: config.calculatorUrls,
+    calculatorHealthIntervalMs: 5000,
     recordsUrl: url(config.recordsPort),
     mailUrl: url(config.mailHttpPort),
     paymentsUrl: url(config.paymentsPort),
@@ -16,6 +18,7 @@ await listen(
     accessTokenTtlS: config.accessTokenTtlS,
     refreshTokenTtlS: config.refreshTokenTtlS,
     loginRateLimitPerMinute: config.loginRateLimitPerMinute,
+    publicUrl: config.publicUrl,
     apiKeyRateLimitPerMinute: config.apiKeyRateLimitPerMinute,
     widgetIpRateLimitPerMinute: config.widgetIpRateLimitPerMinute,
   }),

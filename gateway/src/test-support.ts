@@ -39,5 +39,5 @@ export async function gatewayTestStack(overrides: Partial<GatewayDeps> = {}) {
     for (const s of [recordsHttp, calculatorHttp, mailHttp]) await new Promise((r) => s.server.close(r));
     await records.close();
   };
-  return { app, db: records.db, mailStore, close };
+  return { app, db: records.db, mailStore, recordsMail: records.mailStore, close };
 }

@@ -9,13 +9,22 @@ export interface ProcessSpec {
   name: string;
   entry: string;
   healthUrl: string;
+  /** Variables this process gets on top of the shared environment (each calculator copy its port). */
+  env?: Record<string, string>;
 }
 
 /** Every process of the product, in start order (the gateway last, once its services answer). */
 export function processSpecs(config: Config): ProcessSpec[] {
   const at = (port: number, p = '/health') => `http://${config.host}:${port}${p}`;
+  // CALCULATOR_COPIES copies of the stateless calculator, each on its own port; the gateway spreads over them.
+  const calculators = config.calculatorPorts.map((port, i) => ({
+    name: i === 0 ? 'calculator' : `calculator-${i + 1}`,
+    entry: 'services/calculator/src/server.ts',
+    healthUrl: at(port),
+    env: { CALCULATOR_PORT: String(port) },
+  }));
   return [
-    { name: 'calculator', entry: 'services/calculator/src/server.ts', healthUrl: at(config.calculatorPort) },
+    ...calculators,
     { name: 'records', entry: 'services/records/src/server.ts', healthUrl: at(config.recordsPort) },
     { name: 'mail', entry: 'services/mail-catcher/src/server.ts', healthUrl: at(config.mailHttpPort) },
     { name: 'payments', entry: 'services/payments-standin/src/server.ts', healthUrl: at(config.paymentsPort) },
@@ -54,7 +63,7 @@ export async function startAll(
   const spawnOne = (spec: ProcessSpec) => {
     const child = spawn(process.execPath, ['--import', 'tsx', spec.entry], {
       cwd: ROOT,
-      env,
+      env: { ...env, ...spec.env },
       stdio: options.quiet ? ['ignore', 'ignore', 'pipe'] : ['ignore', 'inherit', 'inherit'],
     });
     if (options.quiet) child.stderr?.on('data', (d: Buffer) => process.stderr.write(`[${spec.name}] ${d}`));

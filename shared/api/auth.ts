@@ -28,3 +28,22 @@ export const MeResponse = z.object({ user: SessionUser });
 
 /** Internal: the records service checks a password for the gateway. */
 export const CredentialsCheckResponse = z.object({ user: SessionUser.extend({ active: z.boolean() }) });
+
+export const LogoutRequest = z
+  .object({ refreshToken: z.string().min(1, 'is required').max(4000).optional().describe('Also ends this refresh token when given.') })
+  .strict();
+
+export const PasswordResetRequest = z.object({ email: z.string().trim().toLowerCase().email('must be an e-mail address').max(200) }).strict();
+
+export const PasswordResetConfirm = z
+  .object({
+    token: z.string().min(20, 'is not a reset token').max(200),
+    password: z.string().min(10, 'must be at least 10 characters').max(200),
+  })
+  .strict();
+
+export const AcceptedResponse = z.object({ accepted: z.literal(true), message: z.string() });
+
+/** Internal: a checked sign-in with the server-side session it opened. */
+export const InternalSessionRequest = z.object({ sessionId: z.string().min(10).max(100) }).strict();
+export const InternalPasswordResetRequest = PasswordResetRequest.extend({ link: z.string().url().max(500) }).strict();

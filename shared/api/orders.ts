@@ -167,9 +167,18 @@ export const OrderSummary = z.object({
   createdAt: IsoDateTime,
   updatedAt: IsoDateTime,
 });
+export const OrderRack = z
+  .object({
+    description: z.string(),
+    planId: z.number().int().nullable().describe('The saved plan the line was priced from, if any.'),
+    spec: z.record(z.string(), z.unknown()).nullable().describe('The rack-plan request the line was priced from.'),
+    quantity: z.number().int(),
+  })
+  .describe('A rack line of the accepted quote: what the shop builds.');
 export const Order = OrderSummary.extend({
   stages: z.array(OrderStage).describe('Status timeline, oldest first.'),
   nextStages: z.array(z.enum(ORDER_STATUSES)).describe('Stages the order may move to now.'),
+  racks: z.array(OrderRack).describe('Racks to build, from the quote (builders cannot read quotes): for batch cutting and the doorway check.'),
 });
 export const OrderPage = page(OrderSummary);
 export const OrderListQuery = listQuery(['number', 'status', 'deliveryDate', 'totalCents', 'createdAt', 'updatedAt']).extend({

@@ -57,7 +57,7 @@ export function rackParts(levels: number, columns: number, tub: Tub, source: str
   return parts.filter((p) => p.quantity > 0);
 }
 
-function rackRequest(parts: CuttingPart[], timeLimitMs = 2000): CuttingPlanRequestInput {
+export function rackRequest(parts: CuttingPart[], timeLimitMs = 2000): CuttingPlanRequestInput {
   return {
     unit: 'in',
     kerf: KERF,
@@ -98,7 +98,7 @@ function seventyTwo(): CuttingPart[] {
   return [...rackParts(12, 3, tub, 'left section'), ...rackParts(12, 3, tub, 'right section')];
 }
 
-function tenRacks(): CuttingPart[] {
+export function tenRacks(): CuttingPart[] {
   const configs: Array<[number, number, string]> = [
     [9, 3, '23 x 16.25 x 6.5'],
     [12, 3, '23 x 16.25 x 6.5'],

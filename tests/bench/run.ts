@@ -7,7 +7,9 @@ import { buildWeb } from '../../scripts/build-web.js';
 import { prepareDatabase } from '../../scripts/lib/database.js';
 import { ROOT, startAll } from '../../scripts/lib/processes.js';
 import { bundleSizes } from './bundle-sizes.js';
+import { runCopiesBench } from './calculator-copies.js';
 import { runCuttingBench } from './cutting.js';
+import { runLoadBench } from './load.js';
 import { moduleTimings } from './module-timing.js';
 import { rackPlanInProcess } from './rack-plan.js';
 import { measure, startBareServer } from './throughput.js';
@@ -82,6 +84,16 @@ if (wants('web') || wants('http')) {
     await stack.stop();
     fs.rmSync(dataDir, { recursive: true, force: true });
   }
+}
+
+if (wants('copies')) {
+  log('\n== Calculator copies: rack plans through the gateway with 1 and 2 copies (autocannon, 16 connections, 8 s each) ==');
+  results.calculatorCopies = await runCopiesBench(log);
+}
+
+if (wants('load')) {
+  log('\n== Load: calculator, records and both at once (tests/bench/load.ts) ==');
+  results.load = await runLoadBench(log);
 }
 
 const outDir = path.join(ROOT, 'tests/bench/results');

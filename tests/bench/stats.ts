@@ -17,3 +17,11 @@ export function medianMs(fn: () => unknown, runs: number, warmup = Math.min(50, 
   }
   return median(times);
 }
+
+/** The p-th percentile (0 to 100, nearest rank) of a list of values; 0 for an empty list. */
+export function percentile(values: number[], p: number): number {
+  if (values.length === 0) return 0;
+  const sorted = [...values].sort((a, b) => a - b);
+  const rank = Math.ceil((p / 100) * sorted.length);
+  return sorted[Math.min(sorted.length - 1, Math.max(0, rank - 1))]!;
+}

@@ -7,9 +7,12 @@ const baseUrl = inject('baseUrl');
 let browser: Awaited<ReturnType<typeof openBrowser>>;
 let page: Page;
 
+const refused: string[] = [];
 beforeAll(async () => {
   browser = await openBrowser();
   page = browser.page;
+  // The browser reports what the content security policy blocked on the console.
+  page.on('console', (m) => /Content Security Policy|Refused to/i.test(m.text()) && refused.push(m.text()));
 });
 afterAll(() => browser.close());
 
@@ -34,7 +37,7 @@ describe('the console', () => {
   it('lets the owner switch among the three modules, fetching each bundle once', async () => {
     const before = elementScripts().length;
     await signIn(page, baseUrl, 'owner@demo.tubwright.test');
-    expect(await navLabels(page)).toEqual(['Planning', 'Collection', 'Orders', 'Users', 'Outbox']);
+    expect(await navLabels(page)).toEqual(['Planning', 'Collection', 'Orders', 'Users', 'API keys', 'Activity', 'Outbox']);
     const modules = [
       { label: 'Planning', tag: 'tw-planning', text: 'Longhold 28' },
       { label: 'Collection', tag: 'tw-collection', text: 'PR-001' },
@@ -59,5 +62,53 @@ describe('the console', () => {
     await page.locator('tw-planning').getByText('Longhold 28').first().waitFor();
     const foreign = browser.requests.filter((u) => !u.startsWith(baseUrl) && !u.startsWith('data:') && !u.startsWith('blob:'));
     expect(foreign).toEqual([]);
+    expect(refused).toEqual([]);
+    await signOut(page);
+  });
+
+  it("shows the owner the shop's activity, newest first", async () => {
+    await signIn(page, baseUrl, 'owner@demo.tubwright.test');
+    await page.getByRole('navigation', { name: 'Modules' }).getByRole('link', { name: /Activity/ }).click();
+    await page.getByRole('table', { name: 'Changes' }).waitFor();
+    await page.getByRole('cell', { name: 'create' }).first().waitFor();
+    await page.screenshot({ path: path.join(SCREENSHOTS, 'console-activity.png') });
+    await signOut(page);
+  });
+
+  it('lets someone who forgot a password choose a new one from the e-mailed link', async () => {
+    await page.goto(`${baseUrl}/sign-in`);
+    await page.getByRole('link', { name: 'Forgot your password?' }).click();
+    await page.getByLabel('E-mail').fill('sales@demo.tubwright.test');
+    await page.getByRole('button', { name: 'Send the link' }).click();
+    await page.getByRole('status').getByText(/reset link is on its way/).waitFor();
+    const link = await resetLinkFromCatcher('sales@demo.tubwright.test');
+    await page.goto(link);
+    await page.getByLabel('New password', { exact: true }).fill('sales-fresh-password');
+    await page.getByRole('button', { name: 'Save the new password' }).click();
+    await page.getByRole('status').getByText(/Password changed/).waitFor();
+    await page.getByRole('link', { name: 'Back to sign-in' }).click();
+    await signIn(page, baseUrl, 'sales@demo.tubwright.test', 'sales-fresh-password');
+    await signOut(page);
+    expect(refused).toEqual([]);
   });
 });
+
+/** The newest reset link mailed to this address, read from the mail catcher through the gateway as the owner. */
+async function resetLinkFromCatcher(email: string): Promise<string> {
+  const login = await fetch(`${baseUrl}/api/v1/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: 'owner@demo.tubwright.test', password: 'tubwright-demo' }),
+  });
+  const { accessToken } = (await login.json()) as { accessToken: string };
+  for (let attempt = 0; attempt < 20; attempt++) {
+    const auth = { authorization: `Bearer ${accessToken}` };
+    const list = (await (await fetch(`${baseUrl}/api/v1/mail/messages?limit=50`, { headers: auth })).json()) as { items?: { id: number; to: string[]; subject: string }[] };
+    const summary = (list.items ?? []).find((m) => m.to.includes(email) && /reset your password/.test(m.subject));
+    const mail = summary && ((await (await fetch(`${baseUrl}/api/v1/mail/messages/${summary.id}`, { headers: auth })).json()) as { text: string });
+    const link = mail?.text.match(/https?:\/\/\S+token=\S+/)?.[0];
+    if (link) return link;
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`no reset mail to ${email}`);
+}

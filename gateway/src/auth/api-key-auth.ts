@@ -1,11 +1,12 @@
 import type { RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit, type Options } from 'express-rate-limit';
 import { ForbiddenError } from '../../../services/common/src/errors.js';
+import { FallbackCache } from './fallback-cache.js';
 import type { ServiceClient } from '../proxy/service-client.js';
 
 export const API_KEY_HEADER = 'x-api-key';
 
-interface VerifiedKey {
+export interface VerifiedKey {
   id: number;
   kind: 'publishable' | 'secret';
   scopes: string[];
@@ -40,13 +41,15 @@ function setCors(res: Parameters<RequestHandler>[1], origin: string): void {
  * Answers browser preflights for key-callable paths: only origins listed on a live publishable key
  * get CORS headers (preflights carry no key, so the key's own origin list is checked on the call).
  */
-export function corsPreflight(records: ServiceClient): RequestHandler {
+export function corsPreflight(records: ServiceClient, origins = new FallbackCache<{ allowed: boolean }>(30_000, 10 * 60_000)): RequestHandler {
   return async (req, res, next) => {
     if (req.method !== 'OPTIONS' || !req.path.startsWith('/api/v1/')) return next();
     const origin = req.header('origin');
     if (!origin || !scopeFor(req.path)) return next(new ForbiddenError('This route cannot be called from another website.'));
     try {
-      const { allowed } = await records.request<{ allowed: boolean }>('GET', `/internal/api-keys/origin-allowed?origin=${encodeURIComponent(origin)}`);
+      const { allowed } = await origins.get(origin, () =>
+        records.request<{ allowed: boolean }>('GET', `/internal/api-keys/origin-allowed?origin=${encodeURIComponent(origin)}`),
+      );
       if (!allowed) return next(new ForbiddenError(`The origin ${origin} is not listed on any of this shop's website keys.`));
     } catch (err) {
       return next(err);
@@ -63,12 +66,12 @@ export function corsPreflight(records: ServiceClient): RequestHandler {
  * A call with `X-API-Key`: the records service says whether the key is live; then its kind,
  * origin and scope decide. The caller becomes an `integrator` for the services.
  */
-export function apiKeyAuth(records: ServiceClient): RequestHandler {
+export function apiKeyAuth(records: ServiceClient, keys = new FallbackCache<VerifiedKey>(30_000, 10 * 60_000)): RequestHandler {
   return async (req, res, next) => {
     const key = req.header(API_KEY_HEADER);
     if (!key) return next();
     try {
-      const verified = await records.request<VerifiedKey>('POST', '/internal/api-keys/verify', { key });
+      const verified = await keys.get(key, () => records.request<VerifiedKey>('POST', '/internal/api-keys/verify', { key }));
       const origin = req.header('origin');
       if (verified.kind === 'publishable') {
         if (!origin || !verified.origins.includes(origin)) {

@@ -3,6 +3,7 @@ import passport from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import { UnauthorizedError } from '../../../services/common/src/errors.js';
 import '../../../services/common/src/internal-identity.js';
+import type { EndedSessions } from './ended-sessions.js';
 import type { AccessClaims, TokenService } from './tokens.js';
 
 declare module 'express-serve-static-core' {
@@ -12,7 +13,7 @@ declare module 'express-serve-static-core' {
 }
 
 /** Verifies the bearer access token and sets the caller's identity; any failure (none, expired, wrong signature) is a 401. */
-export function bearerAuth(tokens: TokenService): RequestHandler {
+export function bearerAuth(tokens: TokenService, ended?: EndedSessions): RequestHandler {
   const authenticator = new passport.Passport();
   authenticator.use(
     new JwtStrategy(
@@ -34,6 +35,7 @@ export function bearerAuth(tokens: TokenService): RequestHandler {
         const expired = info instanceof Error && info.name === 'TokenExpiredError';
         return next(new UnauthorizedError(expired ? 'Your session has expired; sign in again or refresh it.' : undefined));
       }
+      if (ended?.has(claims.sid)) return next(new UnauthorizedError('You signed out of this session; sign in again.'));
       req.claims = claims;
       // The identity the services see, signed by the proxy on the way out.
       req.identity = { kind: 'user', sub: claims.sub, role: claims.role, email: claims.email, iat: 0 };

@@ -15,6 +15,9 @@ export interface AccessClaims {
   name: string;
   role: RoleName;
   typ: 'access';
+  /** The server-side session this token belongs to; sign-out ends it. */
+  sid?: string;
+  exp?: number;
 }
 
 const ISSUER = 'tubwright-gateway';
@@ -38,13 +41,13 @@ export class TokenService {
     return ISSUER;
   }
 
-  session(user: SessionUser) {
+  session(user: SessionUser, sessionId: string) {
     const accessToken = jwt.sign(
-      { email: user.email, name: user.name, role: user.role, typ: 'access' },
+      { email: user.email, name: user.name, role: user.role, typ: 'access', sid: sessionId },
       this.key,
       { algorithm: 'HS256', expiresIn: this.accessTtlS, subject: String(user.id), issuer: ISSUER, audience: 'api' },
     );
-    const refreshToken = jwt.sign({ typ: 'refresh' }, this.key, {
+    const refreshToken = jwt.sign({ typ: 'refresh', sid: sessionId }, this.key, {
       algorithm: 'HS256',
       expiresIn: this.refreshTtlS,
       subject: String(user.id),
@@ -54,11 +57,11 @@ export class TokenService {
     return { accessToken, expiresIn: this.accessTtlS, refreshToken, user };
   }
 
-  /** The user id of a valid refresh token, or null. */
-  verifyRefresh(token: string): number | null {
+  /** The user and session of a well-signed, unexpired refresh token, or null. Whether the session still stands is the records service's call. */
+  verifyRefresh(token: string): { userId: number; sessionId: string } | null {
     try {
       const claims = jwt.verify(token, this.key, { algorithms: ['HS256'], issuer: ISSUER, audience: 'refresh' }) as jwt.JwtPayload;
-      return claims.typ === 'refresh' && claims.sub ? Number(claims.sub) : null;
+      return claims.typ === 'refresh' && claims.sub && typeof claims['sid'] === 'string' ? { userId: Number(claims.sub), sessionId: claims['sid'] } : null;
     } catch {
       return null;
     }

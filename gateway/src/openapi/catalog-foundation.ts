@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { MeResponse, LoginRequest, RefreshRequest, SessionResponse } from '../../../shared/api/auth.js';
+import { AuditPage, AuditQuery } from '../../../shared/api/audit.js';
+import { AcceptedResponse, LoginRequest, LogoutRequest, MeResponse, PasswordResetConfirm, PasswordResetRequest, RefreshRequest, SessionResponse } from '../../../shared/api/auth.js';
 import { Animal, AnimalListQuery, AnimalPage, CreateAnimalRequest, UpdateAnimalRequest } from '../../../shared/api/animals.js';
 import { IdParams } from '../../../shared/api/common.js';
 import { CreateCustomerRequest, Customer, CustomerListQuery, CustomerPage, UpdateCustomerRequest } from '../../../shared/api/customers.js';
@@ -43,10 +44,31 @@ documentRoutes(
     method: 'post', path: '/api/v1/auth/login', tag: 'auth', summary: 'Sign in with e-mail and password', roles: [], body: LoginRequest,
     bodyExample: { email: 'owner@demo.tubwright.test', password: 'tubwright-demo' },
     success: { status: 200, schema: SessionResponse, description: 'A new session' }, errors: [429],
-    description: 'Attempts are rate-limited per address and account.',
+    description: 'Attempts are rate-limited per address and account; after ten wrong passwords in a row the account is locked for 15 minutes (429 `account_locked`) or until a password reset.',
   },
-  { method: 'post', path: '/api/v1/auth/refresh', tag: 'auth', summary: 'Exchange a refresh token for a new session', roles: [], body: RefreshRequest, success: { status: 200, schema: SessionResponse, description: 'A new session' }, errors: [429] },
+  {
+    method: 'post', path: '/api/v1/auth/refresh', tag: 'auth', summary: 'Exchange a refresh token for a new session', roles: [], body: RefreshRequest, success: { status: 200, schema: SessionResponse, description: 'A new session' }, errors: [429],
+    description: 'A refresh token works once: the answer carries its successor. Presenting a spent one again ends the whole sign-in, since it means the token was copied.',
+  },
+  {
+    method: 'post', path: '/api/v1/auth/logout', tag: 'auth', summary: 'Sign out: end this session', roles: ['owner', 'builder', 'keeper', 'sales'], body: LogoutRequest,
+    success: { status: 204, description: 'Signed out; the access and refresh tokens of this session no longer work' },
+  },
+  {
+    method: 'post', path: '/api/v1/auth/password-reset', tag: 'auth', summary: 'E-mail a single-use password reset link', roles: [], body: PasswordResetRequest,
+    success: { status: 202, schema: AcceptedResponse, description: 'Accepted; the same answer whether or not the address has an account' }, errors: [429],
+    description: 'The link is good for 30 minutes and one use.',
+  },
+  {
+    method: 'post', path: '/api/v1/auth/password-reset/confirm', tag: 'auth', summary: 'Choose a new password with a reset token', roles: [], body: PasswordResetConfirm,
+    success: { status: 200, schema: AcceptedResponse, description: 'Password changed; every earlier sign-in of the account is ended' }, errors: [429],
+  },
   { method: 'get', path: '/api/v1/auth/me', tag: 'auth', summary: 'The signed-in user', roles: ['owner', 'builder', 'keeper', 'sales'], success: { status: 200, schema: MeResponse, description: 'The user' } },
+  {
+    method: 'get', path: '/api/v1/audit-log', tag: 'users', summary: 'Who changed what and when', roles: ['owner'], query: AuditQuery,
+    success: { status: 200, schema: AuditPage, description: 'One page, newest first unless sorted otherwise' },
+    description: 'Every business write is logged: users, keys, prices, plans, animals, husbandry, quotes, orders, payments.',
+  },
   { method: 'get', path: '/api/v1/users', tag: 'users', summary: 'List users', roles: ['owner'], query: UserListQuery, success: { status: 200, schema: UserPage, description: 'One page' } },
   { method: 'get', path: '/api/v1/users/:id', tag: 'users', summary: 'Read one user', roles: ['owner'], params: IdParams, success: { status: 200, schema: User, description: 'The user' }, errors: [404] },
   { method: 'post', path: '/api/v1/users', tag: 'users', summary: 'Create a user with a role', roles: ['owner'], body: CreateUserRequest, success: { status: 201, schema: User, description: 'Created' }, errors: [409] },

@@ -20,6 +20,10 @@ documentRoutes(
     roles: ['integrator', 'owner', 'sales'], params: OrderStatusParams,
     success: { status: 200, schema: OrderStatus, description: 'The status' }, errors: [404, 429],
   },
+  {
+    method: 'get', path: '/api/v1/quote-requests/settings', tag: 'quote requests', summary: 'What the widget may show visitors (for website keys)', roles: ['integrator', 'owner', 'sales'],
+    success: { status: 200, schema: WidgetSettings, description: 'Settings' }, description: 'Needs the quote-requests scope. The widget hides its estimate when `showPrices` is false, whatever the page asks.',
+  },
   { method: 'get', path: '/api/v1/widget-settings', tag: 'quote requests', summary: 'What the website widget and quote requests may show', roles: ['owner', 'sales'], success: { status: 200, schema: WidgetSettings, description: 'Settings' } },
   { method: 'put', path: '/api/v1/widget-settings', tag: 'quote requests', summary: 'Change the widget settings', roles: ['owner'], body: WidgetSettings, bodyExample: { showPrices: false }, success: { status: 200, schema: WidgetSettings, description: 'Changed' } },
 );

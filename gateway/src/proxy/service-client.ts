@@ -6,6 +6,9 @@ export class ServiceClient {
   constructor(
     readonly baseUrl: string,
     private readonly internalSecret: string,
+    /** Named in the error when the service does not answer, e.g. "records". */
+    readonly name = 'back-end',
+    private readonly timeoutMs = 5000,
   ) {}
 
   async request<T>(method: string, path: string, body?: unknown, identity?: Omit<Identity, 'iat'>): Promise<T> {
@@ -16,10 +19,11 @@ export class ServiceClient {
         method,
         headers: { 'content-type': 'application/json', [IDENTITY_HEADER]: signed },
         body: body === undefined ? undefined : JSON.stringify(body),
-        signal: AbortSignal.timeout(5000),
+        signal: AbortSignal.timeout(this.timeoutMs),
       });
-    } catch {
-      throw new ApiError(502, 'service_unavailable', 'A back-end service did not answer; try again in a moment.');
+    } catch (err) {
+      if ((err as Error).name === 'TimeoutError') throw new ApiError(504, 'upstream_timeout', `The ${this.name} service took longer than ${this.timeoutMs / 1000} s to answer; try again in a moment.`);
+      throw new ApiError(503, 'service_unavailable', `The ${this.name} service is not answering just now; try again in a moment.`);
     }
     const payload = (await res.json().catch(() => ({}))) as T & Partial<ErrorBody>;
     if (!res.ok) {

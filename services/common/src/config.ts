@@ -28,7 +28,22 @@ export interface Config {
   paymentsWebhookUrl: string;
   /** Sender of the shop's e-mail. */
   mailFrom: string;
+  /** The console's address as people reach it, for links in e-mail. */
+  publicUrl: string;
+  /** The records database: `sqlite:<file>` (the default, from DATABASE_FILE) or a `postgres://` URL. */
+  databaseUrl: string;
+  /** Connection pool bounds for the records database; null leaves the driver's default. */
+  databasePoolMin: number | null;
+  databasePoolMax: number | null;
+  /** How many calculator copies `npm start` runs, and the ports they listen on (the first is CALCULATOR_PORT). */
+  calculatorCopies: number;
+  calculatorPorts: number[];
+  /** Where the gateway (and the records service, the first) reaches the calculator copies. */
+  calculatorUrls: string[];
 }
+
+/** Extra calculator copies listen from CALCULATOR_PORT + 30 upwards (4331, 4332, …), clear of the other defaults. */
+export const CALCULATOR_COPY_PORT_OFFSET = 30;
 
 type Env = Record<string, string | undefined>;
 
@@ -48,6 +63,26 @@ function positiveInt(env: Env, name: string, fallback: number): number {
   const value = Number(raw);
   if (!Number.isInteger(value) || value <= 0) throw new Error(`${name} must be a positive whole number, got "${raw}"`);
   return value;
+}
+
+function optionalPositiveInt(env: Env, name: string): number | null {
+  return env[name] === undefined || env[name] === '' ? null : positiveInt(env, name, 1);
+}
+
+function httpUrls(env: Env, name: string): string[] | null {
+  const raw = env[name];
+  if (raw === undefined || raw.trim() === '') return null;
+  return raw.split(',').map((entry) => {
+    const url = entry.trim().replace(/\/+$/, '');
+    let parsed: URL | null = null;
+    try {
+      parsed = new URL(url);
+    } catch {
+      // reported below
+    }
+    if (!parsed || !/^https?:$/.test(parsed.protocol)) throw new Error(`${name} must be a comma-separated list of http(s) URLs, got "${entry.trim()}"`);
+    return url;
+  });
 }
 
 export function loadConfig(env: Env = process.env, root = process.cwd()): Config {
@@ -77,5 +112,31 @@ export function loadConfig(env: Env = process.env, root = process.cwd()): Config
     stripeWebhookSecret: env.STRIPE_WEBHOOK_SECRET || 'whsec_tubwright_local',
     mailFrom: env.MAIL_FROM || 'Tubwright shop <shop@demo.tubwright.test>',
     paymentsWebhookUrl: env.PAYMENTS_WEBHOOK_URL || `http://${host}:${gatewayPort}/api/v1/payments/webhook`,
+    publicUrl: env.PUBLIC_URL || `http://${host}:${gatewayPort}`,
+    ...databaseSettings(env, root, dataDir),
+    ...calculatorSettings(env, host),
   };
+}
+
+function databaseSettings(env: Env, root: string, dataDir: string) {
+  const databaseFile = path.resolve(root, env.DATABASE_FILE || path.join(dataDir, 'tubwright.sqlite'));
+  const databaseUrl = env.DATABASE_URL || `sqlite:${databaseFile}`;
+  if (!/^(sqlite:|postgres(ql)?:\/\/)/i.test(databaseUrl)) throw new Error(`DATABASE_URL must start with sqlite: or postgres://, got "${databaseUrl}"`);
+  const databasePoolMin = optionalPositiveInt(env, 'DATABASE_POOL_MIN');
+  const databasePoolMax = optionalPositiveInt(env, 'DATABASE_POOL_MAX');
+  if (databasePoolMin !== null && databasePoolMax !== null && databasePoolMin > databasePoolMax) {
+    throw new Error(`DATABASE_POOL_MIN (${databasePoolMin}) must not exceed DATABASE_POOL_MAX (${databasePoolMax})`);
+  }
+  return { databaseUrl, databasePoolMin, databasePoolMax };
+}
+
+function calculatorSettings(env: Env, host: string) {
+  const calculatorPort = port(env, 'CALCULATOR_PORT', 4301);
+  const calculatorCopies = positiveInt(env, 'CALCULATOR_COPIES', 1);
+  if (calculatorCopies > 32) throw new Error(`CALCULATOR_COPIES must be at most 32, got ${calculatorCopies}`);
+  if (calculatorCopies > 1 && calculatorPort === 0) throw new Error('CALCULATOR_COPIES above 1 needs a fixed CALCULATOR_PORT (not 0)');
+  const calculatorPorts = Array.from({ length: calculatorCopies }, (_, i) => (i === 0 ? calculatorPort : calculatorPort + CALCULATOR_COPY_PORT_OFFSET + i - 1));
+  if (calculatorPorts.some((p) => p > 65535)) throw new Error(`CALCULATOR_COPIES ${calculatorCopies} from CALCULATOR_PORT ${calculatorPort} runs past port 65535`);
+  const calculatorUrls = httpUrls(env, 'CALCULATOR_URLS') ?? calculatorPorts.map((p) => `http://${host}:${p}`);
+  return { calculatorCopies, calculatorPorts, calculatorUrls };
 }

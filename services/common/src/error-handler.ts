@@ -10,7 +10,25 @@ type BodyParserError = Error & { type?: string; status?: number; limit?: number 
 
 /** One place turns every error into the API error shape; stacks stay in the log. */
 export function errorHandler(log: (msg: string, err: unknown) => void = defaultLog): ErrorRequestHandler {
-  return (err, _req, res, _next) => {
+  return (err, req, res, next) => {
+    // A refusal sent while the body is still arriving makes Node close the connection under the
+    // sender, and a proxy in front then sees a reset, not our answer: read the rest first (the
+    // gateway caps bodies, so this is bounded), then answer.
+    if (!req.complete && req.readable) {
+      const answer = () => writeError(err, res, log, next);
+      const timer = setTimeout(answer, 5000);
+      req.once('end', () => (clearTimeout(timer), answer()));
+      req.once('error', () => (clearTimeout(timer), answer()));
+      req.resume();
+      return;
+    }
+    writeError(err, res, log, next);
+  };
+}
+
+function writeError(err: unknown, res: Parameters<ErrorRequestHandler>[2], log: (msg: string, err: unknown) => void, _next: unknown): void {
+  {
+    if (res.headersSent) return;
     if (err instanceof ApiError) {
       res.status(err.status).json(errorBody(err));
       return;
@@ -36,7 +54,7 @@ export function errorHandler(log: (msg: string, err: unknown) => void = defaultL
     }
     log('unhandled error', err);
     res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side; it has been logged.' } });
-  };
+  }
 }
 
 function defaultLog(msg: string, err: unknown): void {

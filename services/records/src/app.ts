@@ -13,7 +13,9 @@ import { ordersRoutes } from './orders/orders-routes.js';
 import { plansRoutes } from './plans/plans-routes.js';
 import { quoteRequestsRoutes } from './quote-requests/quote-requests-routes.js';
 import { tubModelsRoutes } from './tub-models/tub-models-routes.js';
-import { internalAuthRoutes, usersRoutes } from './users/users-routes.js';
+import { auditRoutes } from './audit/audit-routes.js';
+import { internalAuthRoutes } from './auth/internal-auth-routes.js';
+import { usersRoutes } from './users/users-routes.js';
 
 export interface RecordsDeps {
   db: Knex;
@@ -24,6 +26,8 @@ export interface RecordsDeps {
   payments: { client: Stripe; webhookSecret: string };
   /** Where uploaded photos are kept (under the data folder). */
   uploadsDir: string;
+  /** How long a sign-in lasts without being refreshed (the refresh token's lifetime). */
+  sessionTtlS?: number;
 }
 
 /** The records service: every business record, behind the gateway only. */
@@ -43,8 +47,9 @@ export function createApp(deps: RecordsDeps): express.Express {
   app.use(ordersRoutes(deps, 'raw'));
   app.use(collectionRoutes(deps, 'raw'));
   app.use(express.json({ limit: '256kb' }));
-  app.use(internalAuthRoutes(db));
+  app.use(internalAuthRoutes(deps));
   app.use(usersRoutes(db));
+  app.use(auditRoutes(db));
   app.use(tubModelsRoutes(db));
   app.use(animalsRoutes(db));
   app.use(customersRoutes(db));

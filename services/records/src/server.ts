@@ -8,13 +8,14 @@ import { Mailer } from './lib/mailer.js';
 import { createPaymentsClient } from './lib/payments.js';
 
 const config = loadConfig();
-const db = openDatabase(config.databaseFile);
+const db = openDatabase(config.databaseUrl, { poolMin: config.databasePoolMin, poolMax: config.databasePoolMax });
 await migrateLatest(db);
 const app = createApp({
   db,
   internalSecret: config.internalSecret,
   uploadsDir: path.join(config.dataDir, 'uploads'),
-  calculator: new CalculatorClient(`http://${config.host}:${config.calculatorPort}`, config.internalSecret),
+  sessionTtlS: config.refreshTokenTtlS,
+  calculator: new CalculatorClient(config.calculatorUrls[0]!, config.internalSecret),
   mailer: new Mailer({ host: config.host, port: config.smtpPort }, config.mailFrom),
   payments: {
     client: createPaymentsClient({ secretKey: config.stripeSecretKey, webhookSecret: config.stripeWebhookSecret, host: config.host, port: config.paymentsPort }),

@@ -10,7 +10,8 @@ import { MailStore } from '../../mail-catcher/src/mail-store.js';
 import { createSmtpServer } from '../../mail-catcher/src/smtp.js';
 import { createApp as createPaymentsStandin } from '../../payments-standin/src/app.js';
 import { createApp } from './app.js';
-import { migrateLatest, openDatabase } from './db/knex.js';
+import { migrateLatest } from './db/knex.js';
+import { openTestDatabase } from './db/test-database.js';
 import { CalculatorClient } from './lib/calculator-client.js';
 import { Mailer } from './lib/mailer.js';
 import { createPaymentsClient } from './lib/payments.js';
@@ -26,12 +27,14 @@ function serve(listener: http.RequestListener): Promise<{ port: number; server: 
 }
 
 /**
- * A records app on a fresh in-memory database, with its real neighbours on loopback: the
+ * A records app on a fresh database (in-memory SQLite, or a schema of its own on the PostgreSQL
+ * server TEST_POSTGRES_URL names), with its real neighbours on loopback: the
  * calculator over HTTP, an SMTP mail catcher and the payments stand-in driven by the provider SDK.
  * `webhookUrl` lets a test receive the stand-in's signed events.
  */
 export async function recordsTestApp(options: { seed?: boolean; webhookUrl?: string } = {}) {
-  const db: Knex = openDatabase(':memory:');
+  const database = await openTestDatabase();
+  const db: Knex = database.db;
   await migrateLatest(db);
   if (options.seed) await seedDemoData(db);
   const calculator = await serve(createCalculatorApp({ internalSecret: TEST_INTERNAL_SECRET }));
@@ -53,9 +56,9 @@ export async function recordsTestApp(options: { seed?: boolean; webhookUrl?: str
   const close = async () => {
     for (const s of [calculator.server, payments.server]) await new Promise((r) => s.close(r));
     await new Promise<void>((r) => smtp.close(() => r()));
-    await db.destroy();
+    await database.dispose();
   };
-  return { app, db, mailStore, stripeWebhookSecret: STRIPE_WEBHOOK_SECRET, close };
+  return { app, db, dbKind: database.kind, mailStore, stripeWebhookSecret: STRIPE_WEBHOOK_SECRET, close };
 }
 
 /** The header the gateway would add for a signed-in user of this role. */

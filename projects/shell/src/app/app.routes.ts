@@ -24,6 +24,11 @@ export const routes: Routes = [
     loadComponent: () => import('./sign-in/sign-in').then((m) => m.SignIn),
   },
   {
+    path: 'reset-password',
+    title: 'Reset password · Tubwright',
+    loadComponent: () => import('./password-reset/password-reset').then((m) => m.PasswordReset),
+  },
+  {
     path: '',
     component: ConsoleLayout,
     canActivate: [signedIn],
@@ -38,6 +43,18 @@ export const routes: Routes = [
         canMatch: [allowedFor('users')],
         title: 'Users · Tubwright',
         loadComponent: () => import('./users/users-page').then((m) => m.UsersPage),
+      },
+      {
+        path: 'api-keys',
+        canMatch: [allowedFor('api-keys')],
+        title: 'API keys · Tubwright',
+        loadComponent: () => import('./api-keys/api-keys-page').then((m) => m.ApiKeysPage),
+      },
+      {
+        path: 'activity',
+        canMatch: [allowedFor('activity')],
+        title: 'Activity · Tubwright',
+        loadComponent: () => import('./activity/activity-list').then((m) => m.ActivityList),
       },
       {
         path: 'outbox',

@@ -8,7 +8,7 @@ import { NotFoundError, UnauthorizedError } from '../../../common/src/errors.js'
 import { allow } from '../../../common/src/roles.js';
 import { parseOrThrow } from '../../../common/src/validate.js';
 import { audit } from '../audit/audit-log.js';
-import { nowIso } from '../db/knex.js';
+import { insertId, nowIso } from '../db/knex.js';
 import { listPage } from '../lib/list.js';
 import { hashApiKey, newApiKey } from './key-material.js';
 
@@ -64,7 +64,7 @@ export function apiKeysRoutes(db: Knex): Router {
       const body = parseOrThrow(CreateApiKeyRequest, req.body);
       const { key, prefix, hash } = newApiKey(body.kind);
       const now = nowIso();
-      const [id] = await db('api_keys').insert({
+      const id = await insertId(db('api_keys'), {
         name: body.name,
         kind: body.kind,
         prefix,

@@ -32,7 +32,9 @@ export async function listPage<Row, Item>(
   if (params.q) {
     const like = `%${params.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
     filtered = filtered.where((w) => {
-      for (const column of options.searchColumns) w.orWhereRaw(`${column} LIKE ? ESCAPE '\\'`, [like]);
+      // lower() on both sides: SQLite's LIKE ignores case, PostgreSQL's does not. `??` quotes the
+      // column, as PostgreSQL reserves some names (`to`).
+      for (const column of options.searchColumns) w.orWhereRaw(`lower(??) LIKE lower(?) ESCAPE '\\'`, [column, like]);
     });
   }
   const countRow = (await filtered.clone().clearSelect().clearOrder().count({ n: '*' }).first()) as { n: number } | undefined;
@@ -40,6 +42,8 @@ export async function listPage<Row, Item>(
   const descending = sort.startsWith('-');
   const column = options.columns[descending ? sort.slice(1) : sort] ?? 'id';
   const rows = (await filtered
+    // Empty values sort as the smallest on both databases (SQLite's way; PostgreSQL's is the largest).
+    .orderByRaw(`(?? is null) ${descending ? 'asc' : 'desc'}`, [column])
     .orderBy([
       { column, order: descending ? 'desc' : 'asc' },
       { column: 'id', order: 'asc' },

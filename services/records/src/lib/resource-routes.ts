@@ -8,7 +8,7 @@ import type { Identity } from '../../../common/src/internal-identity.js';
 import { allow, type Access } from '../../../common/src/roles.js';
 import { parseOrThrow } from '../../../common/src/validate.js';
 import { audit } from '../audit/audit-log.js';
-import { nowIso } from '../db/knex.js';
+import { insertId, nowIso } from '../db/knex.js';
 import { listPage } from './list.js';
 
 const toSnake = (key: string) => key.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
@@ -97,7 +97,7 @@ export function resourceRoutes(db: Knex, spec: ResourceSpec): Router {
     json(async (req, res) => {
       const body = parseOrThrow(spec.create, req.body);
       const now = nowIso();
-      const [id] = await db(spec.table).insert({ ...itemToRow(body), created_at: now, updated_at: now });
+      const id = await insertId(db(spec.table), { ...itemToRow(body), created_at: now, updated_at: now });
       await audit(db, req.identity, 'create', spec.entity, id!, body);
       res.status(201);
       return toItem(await findLive(id!));

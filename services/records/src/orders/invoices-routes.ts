@@ -10,7 +10,7 @@ import { allow } from '../../../common/src/roles.js';
 import { parseOrThrow } from '../../../common/src/validate.js';
 import type { RecordsDeps } from '../app.js';
 import { audit } from '../audit/audit-log.js';
-import { nowIso } from '../db/knex.js';
+import { insertId, nowIso } from '../db/knex.js';
 import { listPage } from '../lib/list.js';
 import { renderPdf } from './document-pdf.js';
 import { escapeHtml, formatCents, sendLogged, shopName } from './mail-notices.js';
@@ -128,7 +128,7 @@ export function invoicesRoutes(deps: RecordsDeps): Router {
         const quote = await trx('quotes').where({ id: order.quoteId }).first();
         const now = nowIso();
         const number = await nextNumber(trx, 'invoices', 'INV', new Date(now).getUTCFullYear());
-        const [newId] = await trx('invoices').insert({
+        const newId = await insertId(trx('invoices'), {
           number,
           order_id: id,
           issued_on: todayIso(),

@@ -6,6 +6,9 @@ import type { Knex } from 'knex';
  */
 export async function nextNumber(trx: Knex, table: 'quotes' | 'orders' | 'invoices', prefix: 'Q' | 'O' | 'INV', year: number): Promise<string> {
   const head = `${prefix}-${year}-`;
+  // PostgreSQL lets concurrent transactions read the same maximum; a lock held until this one
+  // commits makes them take turns. (SQLite has one writer at a time already.)
+  if (trx.client.config.client === 'pg') await trx.raw('select pg_advisory_xact_lock(hashtext(?))', [head]);
   const row = (await trx(table)
     .where('number', 'like', `${head}%`)
     .max({ n: trx.raw('CAST(SUBSTR(number, ?) AS INTEGER)', [head.length + 1]) })

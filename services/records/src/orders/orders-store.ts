@@ -2,7 +2,7 @@ import type { Knex } from 'knex';
 import type { z } from 'zod';
 import type { Order, OrderStage, OrderStatus, OrderSummary, Payment } from '../../../../shared/api/orders.js';
 import { ConflictError, NotFoundError } from '../../../common/src/errors.js';
-import { nowIso } from '../db/knex.js';
+import { insertId, nowIso } from '../db/knex.js';
 import { nextNumber } from './numbering.js';
 import { nextStages } from './order-flow.js';
 import { todayIso } from './quotes-store.js';
@@ -72,7 +72,13 @@ export async function findOrder(db: Knex, id: number): Promise<OrderItem> {
   const row = await ordersQuery(db).where('orders.id', id).first();
   if (!row) throw new NotFoundError(`No order with id ${id}.`);
   const stages = (await db('order_stages').where({ order_id: id }).orderBy('id')).map(toStage);
-  return { ...toOrderSummary(row), stages, nextStages: [...nextStages(row.status)] };
+  const racks = (await db('quote_lines').where({ quote_id: row.quote_id, kind: 'rack' }).orderBy('position')).map((line: Record<string, any>) => ({
+    description: line.description,
+    planId: line.plan_id ?? null,
+    spec: line.spec_json ? JSON.parse(line.spec_json) : null,
+    quantity: line.quantity,
+  }));
+  return { ...toOrderSummary(row), stages, nextStages: [...nextStages(row.status)], racks };
 }
 
 export interface DeliveryInput {
@@ -103,7 +109,7 @@ export async function orderFromQuote(db: Knex, quoteId: number, delivery: Delive
     if (quote.status !== 'sent') throw new ConflictError(`Quote ${quote.number} is ${quote.status}; only a sent quote can be accepted.`, 'quoteId');
     const now = nowIso();
     const number = await nextNumber(trx, 'orders', 'O', new Date(now).getUTCFullYear());
-    const [orderId] = await trx('orders').insert({
+    const orderId = await insertId(trx('orders'), {
       number,
       quote_id: quoteId,
       customer_id: quote.customer_id,

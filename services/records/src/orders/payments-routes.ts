@@ -9,7 +9,7 @@ import { allow } from '../../../common/src/roles.js';
 import { parseOrThrow } from '../../../common/src/validate.js';
 import type { RecordsDeps } from '../app.js';
 import { audit } from '../audit/audit-log.js';
-import { nowIso } from '../db/knex.js';
+import { insertId, nowIso } from '../db/knex.js';
 import { idempotent } from './idempotency.js';
 import { notifyOrder } from './mail-notices.js';
 import { enterStage, findOrder, orderPayments, toPayment } from './orders-store.js';
@@ -135,7 +135,7 @@ export function paymentsRoutes(deps: RecordsDeps): Router {
           throw providerError(err);
         }
         const now = nowIso();
-        const [paymentId] = await db('payments').insert({
+        const paymentId = await insertId(db('payments'), {
           order_id: id,
           provider_id: intent.id,
           kind: body.kind,

@@ -2,7 +2,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { RACK_PLAN_EXAMPLE, RackPlanRequest } from '../../../../shared/api/rack-plan.js';
 import { planRack } from '../../../calculator/src/domain/rack-plan.js';
-import { nowIso } from '../db/knex.js';
+import { insertId, nowIso } from '../db/knex.js';
 import { recordsTestApp } from '../test-support.js';
 import { builder, keeper, owner, sales } from './orders-test-helpers.js';
 
@@ -62,7 +62,7 @@ describe('quotes', () => {
   it('prices a saved plan from its stored result', async () => {
     // Written straight into the plans area's table, as a saved plan would be.
     const result = { unit: 'in', dimensions: { overallWidth: 60, overallDepth: 24, overallHeight: 70 }, cost: { total: 1234.565 } };
-    const [planId] = await ctx.db('plans').insert({ name: 'Breeder wall', spec_json: JSON.stringify(RACK_PLAN_EXAMPLE), result_json: JSON.stringify(result), summary_json: '{}', unit: 'in', created_at: nowIso(), updated_at: nowIso() });
+    const planId = await insertId(ctx.db('plans'), { name: 'Breeder wall', spec_json: JSON.stringify(RACK_PLAN_EXAMPLE), result_json: JSON.stringify(result), summary_json: '{}', unit: 'in', created_at: nowIso(), updated_at: nowIso() });
     const res = await request(ctx.app).post('/api/v1/quotes').set(sales()).send({ customerId: 3, lines: [{ kind: 'rack', planId }] });
     expect(res.status).toBe(201);
     // $1,234.565 -> 123 456.5 cents -> 123 457

@@ -2,7 +2,7 @@ import type { Knex } from 'knex';
 import type { z } from 'zod';
 import type { Quote, QuoteLine, QuoteSummary } from '../../../../shared/api/orders.js';
 import { NotFoundError } from '../../../common/src/errors.js';
-import { nowIso } from '../db/knex.js';
+import { insertId, nowIso } from '../db/knex.js';
 import { nextNumber } from './numbering.js';
 import { bpToPercent, lineAmountCents, quoteTotals, type LineKind, type QuoteRates } from './quote-totals.js';
 
@@ -129,7 +129,7 @@ export async function insertQuote(db: Knex, customerId: number, head: QuoteHead,
   const now = nowIso();
   return db.transaction(async (trx) => {
     const number = await nextNumber(trx, 'quotes', 'Q', new Date(now).getUTCFullYear());
-    const [id] = await trx('quotes').insert({
+    const id = await insertId(trx('quotes'), {
       number,
       customer_id: customerId,
       status,

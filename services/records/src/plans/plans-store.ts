@@ -2,7 +2,7 @@ import type { Knex } from 'knex';
 import type { PlanSummary } from '../../../../shared/api/plans.js';
 import type { RackPlanRequest, RackPlanResponse } from '../../../../shared/api/rack-plan.js';
 import { ConflictError } from '../../../common/src/errors.js';
-import { nowIso } from '../db/knex.js';
+import { insertId, nowIso } from '../db/knex.js';
 import { listPage, type ListParams } from '../lib/list.js';
 import { planSummary } from './plan-summary.js';
 
@@ -146,7 +146,7 @@ export function plansStore(db: Knex) {
     async create(p: NewPlan): Promise<number> {
       const now = nowIso();
       return db.transaction(async (trx) => {
-        const [id] = await trx('plans').insert({
+        const id = await insertId(trx('plans'), {
           name: p.name,
           notes: p.notes,
           tub_model_id: p.tubModelId,

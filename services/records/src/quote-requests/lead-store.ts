@@ -1,7 +1,7 @@
 import type { Knex } from 'knex';
 import type { Identity } from '../../../common/src/internal-identity.js';
 import { audit } from '../audit/audit-log.js';
-import { nowIso } from '../db/knex.js';
+import { insertId, nowIso } from '../db/knex.js';
 
 export interface Lead {
   customerId: number;
@@ -26,7 +26,7 @@ export async function findOrCreateLead(
   if (existing) return { customerId: existing.id, created: false };
   const now = nowIso();
   const notes = `Website lead${visitor.source ? ` from ${visitor.source}` : ''}; agreed to be contacted on ${now}.`;
-  const [id] = await trx('customers').insert({ name: visitor.name, email: visitor.email, phone: visitor.phone, notes, created_at: now, updated_at: now });
+  const id = await insertId(trx('customers'), { name: visitor.name, email: visitor.email, phone: visitor.phone, notes, created_at: now, updated_at: now });
   await audit(trx, identity, 'create', 'customer', id!, { lead: true, source: visitor.source });
   return { customerId: id!, created: true };
 }

@@ -131,6 +131,8 @@ export function quoteRequestsRoutes(deps: RecordsDeps): Router {
   );
 
   router.get('/api/v1/widget-settings', allow('owner', 'sales'), json(async () => readWidgetSettings(db)));
+  // The same, for the widget itself: a page's `show-prices` attribute cannot overrule the shop.
+  router.get('/api/v1/quote-requests/settings', allow('integrator', 'owner', 'sales'), scope('quote-requests'), json(async () => readWidgetSettings(db)));
 
   router.put(
     '/api/v1/widget-settings',

@@ -3,7 +3,7 @@ import { addDays, daysBetween, todayUtc } from '../collection/shared/dates.js';
 import { expectedHatch } from '../collection/breeding/breeding-dates.js';
 import { tubSlots } from '../collection/racks/rack-rules.js';
 import { defaultIntervalDays, feedingStage, suggestedPreyMassG } from '../collection/schedules/feeding-schedule.js';
-import { nowIso } from '../db/knex.js';
+import { insertId, nowIso } from '../db/knex.js';
 
 /*
  * Invented collection data for the demo: three racks of 5 x 3 tubs matching the locations the
@@ -37,9 +37,9 @@ export async function seedCollectionDemo(db: Knex, today = todayUtc()): Promise<
     // Racks and tubs
     const tubIdByLabel = new Map<string, number>();
     for (const rack of RACKS) {
-      const [rackId] = await trx('racks').insert({ ...rack, levels: 5, columns: 3, plan_id: null, ...stamp });
+      const rackId = await insertId(trx('racks'), { ...rack, levels: 5, columns: 3, plan_id: null, ...stamp });
       for (const slot of tubSlots(rack.name, 5, 3)) {
-        const [tubId] = await trx('tubs').insert({ rack_id: rackId, ...slot, ...stamp });
+        const tubId = await insertId(trx('tubs'), { rack_id: rackId, ...slot, ...stamp });
         tubIdByLabel.set(slot.label, tubId!);
       }
     }
@@ -85,7 +85,7 @@ export async function seedCollectionDemo(db: Knex, today = todayUtc()): Promise<
 
     // Traits and genes
     const traitId: Record<string, number> = {};
-    for (const t of TRAITS) traitId[t.name] = (await trx('traits').insert({ ...t, ...stamp }))[0]!;
+    for (const t of TRAITS) traitId[t.name] = await insertId(trx('traits'), { ...t, ...stamp });
     const adult = (sex: string) =>
       animals.filter((a) => a.species === 'Python regius' && a.sex === sex && a.status === 'active' && a.hatch_date && daysBetween(a.hatch_date, today) > 1100);
     const [sire] = adult('male');
@@ -107,8 +107,8 @@ export async function seedCollectionDemo(db: Knex, today = todayUtc()): Promise<
 
     // Two pairings; the first has laid
     if (sire && dam1 && dam2) {
-      const [laid] = await trx('pairings').insert({ sire_id: sire.id, dam_id: dam1.id, season: '2026-27', status: 'laid', ovulation_date: addDays(today, -70), pre_lay_shed_date: addDays(today, -50), notes: 'Good feeding response before the season.', ...stamp });
-      const [locked] = await trx('pairings').insert({ sire_id: sire.id, dam_id: dam2.id, season: '2026-27', status: 'locked', ovulation_date: null, pre_lay_shed_date: null, notes: '', ...stamp });
+      const laid = await insertId(trx('pairings'), { sire_id: sire.id, dam_id: dam1.id, season: '2026-27', status: 'laid', ovulation_date: addDays(today, -70), pre_lay_shed_date: addDays(today, -50), notes: 'Good feeding response before the season.', ...stamp });
+      const locked = await insertId(trx('pairings'), { sire_id: sire.id, dam_id: dam2.id, season: '2026-27', status: 'locked', ovulation_date: null, pre_lay_shed_date: null, notes: '', ...stamp });
       await trx('pairing_observations').insert([
         { pairing_id: laid, kind: 'introduced', observed_on: addDays(today, -120), notes: '', ...stamp },
         { pairing_id: laid, kind: 'lock', observed_on: addDays(today, -118), notes: 'About three hours.', ...stamp },

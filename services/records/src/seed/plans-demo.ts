@@ -3,7 +3,7 @@ import { RackPlanRequest, type PriceKey, type RackPlanRequestInput } from '../..
 import { MATERIALS } from '../../../calculator/src/domain/materials.js';
 // A seed may use the pure domain directly; the routes ask the calculator over HTTP.
 import { planRack } from '../../../calculator/src/domain/rack-plan.js';
-import { nowIso } from '../db/knex.js';
+import { insertId, nowIso } from '../db/knex.js';
 import { mergePrices } from '../plans/plan-calculation.js';
 import { planSummary } from '../plans/plan-summary.js';
 import { calculatorPriceMeta } from '../plans/price-list-store.js';
@@ -143,7 +143,7 @@ export async function seedPlansDemo(db: Knex): Promise<void> {
           summary_json: JSON.stringify(planSummary(c.spec, c.result)),
           unit: c.result.unit,
         });
-        const [id] = await trx('plans').insert({
+        const id = await insertId(trx('plans'), {
           name: p.name,
           notes: p.notes,
           tub_model_id: model?.id ?? null,

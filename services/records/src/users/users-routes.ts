@@ -1,6 +1,5 @@
 import { Router } from 'express';
 import type { Knex } from 'knex';
-import { LoginRequest } from '../../../../shared/api/auth.js';
 import { IdParams } from '../../../../shared/api/common.js';
 import { CreateUserRequest, UpdateUserRequest, UserListQuery } from '../../../../shared/api/users.js';
 import { json } from '../../../common/src/async-handler.js';
@@ -8,38 +7,9 @@ import { ConflictError, NotFoundError, UnauthorizedError, UnprocessableError } f
 import { allow } from '../../../common/src/roles.js';
 import { parseOrThrow } from '../../../common/src/validate.js';
 import { audit } from '../audit/audit-log.js';
-import { hashPassword, verifyPassword } from './passwords.js';
+import { sessionStore } from '../auth/session-store.js';
+import { hashPassword } from './passwords.js';
 import { toUserView, usersStore } from './users-store.js';
-
-/** The gateway asks here whether a password is right; it signs the tokens itself. */
-export function internalAuthRoutes(db: Knex): Router {
-  const users = usersStore(db);
-  const router = Router();
-  router.post(
-    '/internal/auth/check',
-    allow(),
-    json(async (req) => {
-      const { email, password } = parseOrThrow(LoginRequest, req.body);
-      const row = await users.findByEmail(email);
-      // Same answer for an unknown e-mail and a wrong password, so accounts cannot be probed.
-      if (!row || !(await verifyPassword(password, row.password_hash)) || !row.active) {
-        throw new UnauthorizedError('E-mail or password is wrong, or the account is deactivated.');
-      }
-      return { user: { ...sessionUser(row), active: Boolean(row.active) } };
-    }),
-  );
-  router.get(
-    '/internal/users/:id',
-    allow(),
-    json(async (req) => {
-      const { id } = parseOrThrow(IdParams, req.params);
-      const row = await users.findById(id);
-      if (!row) throw new NotFoundError('No such user.');
-      return { user: { ...sessionUser(row), active: Boolean(row.active) } };
-    }),
-  );
-  return router;
-}
 
 function sessionUser(row: { id: number; email: string; name: string; role: 'owner' | 'builder' | 'keeper' | 'sales' }) {
   return { id: row.id, email: row.email, name: row.name, role: row.role };
@@ -106,6 +76,10 @@ export function usersRoutes(db: Knex): Router {
         ...(body.active !== undefined && { active: body.active }),
         ...(body.password !== undefined && { password_hash: await hashPassword(body.password) }),
       });
+      // A new password, a new role or a deactivation ends the user's sign-ins (the access token lapses within minutes).
+      if (body.password !== undefined || body.active === false || (body.role !== undefined && body.role !== row.role)) {
+        await sessionStore(db, 0).revokeAllOf(id);
+      }
       await audit(db, req.identity, 'update', 'user', id, { ...body, password: body.password ? '(changed)' : undefined });
       return toUserView(updated!);
     }),

@@ -1,6 +1,6 @@
 import type { Knex } from 'knex';
 import type { RoleName } from '../../../../shared/api/common.js';
-import { nowIso } from '../db/knex.js';
+import { insertId, nowIso } from '../db/knex.js';
 import { listPage, type ListParams } from '../lib/list.js';
 
 export interface UserRow {
@@ -49,7 +49,7 @@ export function usersStore(db: Knex) {
       }),
     async create(user: { email: string; name: string; role: RoleName; passwordHash: string }): Promise<UserRow> {
       const now = nowIso();
-      const [id] = await db('users').insert({
+      const id = await insertId(db('users'), {
         email: user.email,
         name: user.name,
         role: user.role,

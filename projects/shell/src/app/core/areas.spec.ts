@@ -5,7 +5,7 @@ describe('areas by role', () => {
   const names = (role: Role | null) => areasFor(role).map((a) => a.name);
 
   it('gives each role exactly its modules', () => {
-    expect(names('owner')).toEqual(['planning', 'collection', 'orders', 'users', 'outbox']);
+    expect(names('owner')).toEqual(['planning', 'collection', 'orders', 'users', 'api-keys', 'activity', 'outbox']);
     expect(names('builder')).toEqual(['planning', 'orders']);
     expect(names('keeper')).toEqual(['collection']);
     expect(names('sales')).toEqual(['orders', 'planning']);

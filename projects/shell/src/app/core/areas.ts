@@ -5,7 +5,7 @@ export const MODULE_NAMES = ['planning', 'collection', 'orders'] as const;
 export type ModuleName = (typeof MODULE_NAMES)[number];
 
 /** Everything the side navigation can lead to: modules plus the owner's own pages. */
-export type AreaName = ModuleName | 'users' | 'outbox';
+export type AreaName = ModuleName | 'users' | 'api-keys' | 'activity' | 'outbox';
 
 export interface Area {
   name: AreaName;
@@ -20,12 +20,14 @@ export const AREAS: Record<AreaName, Area> = {
   collection: { name: 'collection', label: 'Collection', icon: 'pets', purpose: 'animals, feedings and breeding' },
   orders: { name: 'orders', label: 'Orders', icon: 'receipt_long', purpose: 'customers, quotes and deliveries' },
   users: { name: 'users', label: 'Users', icon: 'manage_accounts', purpose: 'who may sign in, and with which role' },
+  'api-keys': { name: 'api-keys', label: 'API keys', icon: 'key', purpose: 'keys for the website widget and partners' },
+  activity: { name: 'activity', label: 'Activity', icon: 'history', purpose: 'who changed what, and when' },
   outbox: { name: 'outbox', label: 'Outbox', icon: 'outgoing_mail', purpose: 'e-mail the shop has sent' },
 };
 
 /** Which areas each role may open, in the order its navigation lists them. The API enforces the same. */
 const ACCESS: Record<Role, readonly AreaName[]> = {
-  owner: ['planning', 'collection', 'orders', 'users', 'outbox'],
+  owner: ['planning', 'collection', 'orders', 'users', 'api-keys', 'activity', 'outbox'],
   builder: ['planning', 'orders'],
   keeper: ['collection'],
   sales: ['orders', 'planning'],

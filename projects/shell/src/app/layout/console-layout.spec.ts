@@ -34,9 +34,9 @@ describe('ConsoleLayout navigation', () => {
     expect(links.map(([, href]) => href)).toEqual(['/orders', '/planning']);
   });
 
-  it('shows the owner every module plus users and outbox', async () => {
+  it('shows the owner every module plus users, API keys, activity and outbox', async () => {
     const { links } = await renderAs('owner');
-    expect(links.map(([, href]) => href)).toEqual(['/planning', '/collection', '/orders', '/users', '/outbox']);
+    expect(links.map(([, href]) => href)).toEqual(['/planning', '/collection', '/orders', '/users', '/api-keys', '/activity', '/outbox']);
   });
 
   it('names the account in the user menu button', async () => {

@@ -4,7 +4,7 @@ import { MatButton } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatProgressSpinner } from '@angular/material/progress-spinner';
-import { Router } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 import { AuthApi, ErrorBanner, describeApiError, toApiError } from '@tubwright/kit';
 import { homeFor } from '../core/areas';
 import { safeReturnUrl } from '../core/module-url';
@@ -12,7 +12,7 @@ import { safeReturnUrl } from '../core/module-url';
 @Component({
   selector: 'tw-sign-in',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatFormFieldModule, MatInput, MatButton, MatProgressSpinner, ErrorBanner],
+  imports: [ReactiveFormsModule, MatFormFieldModule, MatInput, MatButton, MatProgressSpinner, ErrorBanner, RouterLink],
   templateUrl: './sign-in.html',
   styleUrl: './sign-in.scss',
 })

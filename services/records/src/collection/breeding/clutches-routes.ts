@@ -8,7 +8,7 @@ import { ConflictError, UnprocessableError, ValidationError } from '../../../../
 import { allow } from '../../../../common/src/roles.js';
 import { parseOrThrow } from '../../../../common/src/validate.js';
 import { audit } from '../../audit/audit-log.js';
-import { nowIso } from '../../db/knex.js';
+import { insertId, nowIso } from '../../db/knex.js';
 import type { CalculatorClient } from '../../lib/calculator-client.js';
 import { KEEPERS } from '../shared/access.js';
 import { assertNotFuture } from '../shared/dates.js';
@@ -36,13 +36,13 @@ export function clutchesRoutes(db: Knex, calculator: CalculatorClient): Router {
       });
       const hatch = expectedHatch(body.laidOn, body.incubationTempF);
       const now = nowIso();
-      const [id] = await db.transaction(async (trx) => {
-        const ids = await trx('clutches').insert({
+      const id = await db.transaction(async (trx) => {
+        const clutchId = await insertId(trx('clutches'), {
           pairing_id: body.pairingId, laid_on: body.laidOn, fertile_eggs: body.fertileEggs, slugs: body.slugs, incubation_temp_f: body.incubationTempF,
           humidity_pct: body.humidityPct, expected_hatch_from: hatch.from, expected_hatch_to: hatch.to, notes: body.notes, created_at: now, updated_at: now,
         });
         await trx('pairings').where({ id: body.pairingId }).update({ status: 'laid', updated_at: now });
-        return ids;
+        return clutchId;
       });
       await audit(db, req.identity, 'create', 'clutch', id!, body);
       res.status(201);
@@ -105,7 +105,7 @@ export function clutchesRoutes(db: Knex, calculator: CalculatorClient): Router {
         const out = [];
         for (const [i, h] of body.hatchlings.entries()) {
           const morph = morphLabel(derived[i]!.map((g) => ({ trait: names.get(g.traitId)!, state: g.state, hetProbability: g.hetProbability })));
-          const [animalId] = await trx('animals').insert({
+          const animalId = await insertId(trx('animals'), {
             code: h.code, name: h.name, species: dam.species, morph, sex: h.sex, hatch_date: body.hatchedOn, status: 'active',
             origin: 'bred', sire_id: pairing.sire.id, dam_id: pairing.dam.id, clutch_id: id, created_at: now, updated_at: now,
           });

@@ -8,7 +8,7 @@ import { ConflictError, UnprocessableError } from '../../../../common/src/errors
 import { allow } from '../../../../common/src/roles.js';
 import { parseOrThrow } from '../../../../common/src/validate.js';
 import { audit } from '../../audit/audit-log.js';
-import { nowIso } from '../../db/knex.js';
+import { insertId, nowIso } from '../../db/knex.js';
 import type { CalculatorClient } from '../../lib/calculator-client.js';
 import { KEEPERS } from '../shared/access.js';
 import { assertNotFuture, assertRealDate } from '../shared/dates.js';
@@ -43,7 +43,7 @@ export function pairingsRoutes(db: Knex, calculator: CalculatorClient): Router {
       await checkParent(body.sireId, 'male', 'sireId');
       await checkParent(body.damId, 'female', 'damId');
       const now = nowIso();
-      const [id] = await db('pairings').insert({
+      const id = await insertId(db('pairings'), {
         sire_id: body.sireId, dam_id: body.damId, season: body.season, status: body.status,
         ovulation_date: body.ovulationDate, pre_lay_shed_date: body.preLayShedDate, notes: body.notes, created_at: now, updated_at: now,
       });

@@ -7,7 +7,7 @@ import { ConflictError, NotFoundError } from '../../../../common/src/errors.js';
 import { allow } from '../../../../common/src/roles.js';
 import { parseOrThrow } from '../../../../common/src/validate.js';
 import { audit } from '../../audit/audit-log.js';
-import { nowIso } from '../../db/knex.js';
+import { insertId, nowIso } from '../../db/knex.js';
 import { listPage } from '../../lib/list.js';
 import { KEEPERS, KEEPERS_AND_SALES } from '../shared/access.js';
 import { liveAnimal } from '../shared/animals-lookup.js';
@@ -45,7 +45,7 @@ export function traitsRoutes(db: Knex): Router {
       const body = parseOrThrow(CreateTraitRequest, req.body);
       if (await db('traits').whereRaw('lower(name) = lower(?)', [body.name]).first()) throw new ConflictError(`The trait ${body.name} is on the list already.`, 'name');
       const now = nowIso();
-      const [id] = await db('traits').insert({ ...body, created_at: now, updated_at: now });
+      const id = await insertId(db('traits'), { ...body, created_at: now, updated_at: now });
       await audit(db, req.identity, 'create', 'trait', id!, body);
       res.status(201);
       return find(id!);

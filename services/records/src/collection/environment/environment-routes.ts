@@ -6,7 +6,7 @@ import { UnprocessableError, ValidationError } from '../../../../common/src/erro
 import { allow } from '../../../../common/src/roles.js';
 import { parseOrThrow } from '../../../../common/src/validate.js';
 import { audit } from '../../audit/audit-log.js';
-import { nowIso } from '../../db/knex.js';
+import { insertId, nowIso } from '../../db/knex.js';
 import { listPage } from '../../lib/list.js';
 import { findRack } from '../racks/racks-store.js';
 import { KEEPERS, actorOf } from '../shared/access.js';
@@ -78,7 +78,7 @@ export function environmentRoutes(db: Knex): Router {
         throw new UnprocessableError(`No rack with id ${body.rackId}.`, 'rackId');
       });
       const now = nowIso();
-      const [id] = await db('environment_readings').insert({
+      const id = await insertId(db('environment_readings'), {
         rack_id: body.rackId, taken_at: toUtcIso(body.takenAt), temp_f: body.tempF, humidity_pct: body.humidityPct, probe: body.probe, source: 'manual', created_by: actorOf(req.identity), created_at: now, updated_at: now,
       });
       res.status(201);

@@ -2,7 +2,7 @@ import type { Knex } from 'knex';
 import type { z } from 'zod';
 import type { BulkFeedingRequest, CreateEventRequest, EventKind, HusbandryEvent } from '../../../../../shared/api/collection-husbandry.js';
 import { ConflictError, NotFoundError } from '../../../../common/src/errors.js';
-import { nowIso } from '../../db/knex.js';
+import { insertId, nowIso } from '../../db/knex.js';
 import { eventPayload, rowToEvent, type EventRow } from './event-rules.js';
 
 export const liveEvents = (db: Knex) =>
@@ -25,7 +25,7 @@ export async function syncLatestWeight(db: Knex, animalId: number): Promise<void
 
 export async function insertEvent(db: Knex, animalId: number, event: CreateEventRequest & { occurredAt: string }, actor: string, batchId: number | null = null): Promise<number> {
   const now = nowIso();
-  const [id] = await db('events').insert({
+  const id = await insertId(db('events'), {
     animal_id: animalId,
     kind: event.kind,
     occurred_at: event.occurredAt,
@@ -113,7 +113,7 @@ export function writeFeedingBatch(
 ): Promise<number> {
   return db.transaction(async (trx) => {
     const now = nowIso();
-    const [batchId] = await trx('event_batches').insert({ rack_id: rackId, kind: 'feeding', occurred_at: occurredAt, created_by: actor, created_at: now, updated_at: now });
+    const batchId = await insertId(trx('event_batches'), { rack_id: rackId, kind: 'feeding', occurred_at: occurredAt, created_by: actor, created_at: now, updated_at: now });
     for (const entry of body.entries) {
       const preySize = entry.preySize ?? body.preySize;
       await insertEvent(

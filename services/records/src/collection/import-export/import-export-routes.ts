@@ -6,7 +6,7 @@ import { UnprocessableError } from '../../../../common/src/errors.js';
 import { allow } from '../../../../common/src/roles.js';
 import { parseOrThrow } from '../../../../common/src/validate.js';
 import { audit } from '../../audit/audit-log.js';
-import { nowIso } from '../../db/knex.js';
+import { insertId, nowIso } from '../../db/knex.js';
 import { rowToEvent, type EventRow } from '../husbandry/event-rules.js';
 import { KEEPERS } from '../shared/access.js';
 import { csvBody, parseCsv, toCsv } from '../shared/csv.js';
@@ -61,7 +61,7 @@ export function importExportRoutes(db: Knex): Router {
         const out: number[] = [];
         for (const { animal } of result.animals) {
           const { hatchDate, weightG, acquiredFrom, forSale, feedingIntervalDays, ...rest } = animal;
-          const [id] = await trx('animals').insert({ ...rest, hatch_date: hatchDate, weight_g: weightG, acquired_from: acquiredFrom, for_sale: forSale, feeding_interval_days: feedingIntervalDays, created_at: now, updated_at: now });
+          const id = await insertId(trx('animals'), { ...rest, hatch_date: hatchDate, weight_g: weightG, acquired_from: acquiredFrom, for_sale: forSale, feeding_interval_days: feedingIntervalDays, created_at: now, updated_at: now });
           out.push(id!);
         }
         return out;

@@ -4,27 +4,33 @@ import path from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp, type RecordsDeps } from '../../app.js';
-import { migrateLatest, openDatabase } from '../../db/knex.js';
+import type { Knex } from 'knex';
+import { migrateLatest } from '../../db/knex.js';
+import { openTestDatabase, type TestDatabase } from '../../db/test-database.js';
 import { seedDemoData } from '../../seed/demo-seed.js';
 import { asRole, TEST_INTERNAL_SECRET } from '../../test-support.js';
 import { MAX_PHOTO_BYTES } from './image-check.js';
 
 // Photos touch only the database and the uploads folder, so this app gets just those (plus an uploads dir the shared test app lacks).
-const db = openDatabase(':memory:');
+let database: TestDatabase;
+let db: Knex;
 const uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), 'tw-photos-'));
-const app = createApp({ db, internalSecret: TEST_INTERNAL_SECRET, uploadsDir } as unknown as RecordsDeps);
+let app: ReturnType<typeof createApp>;
 const keeper = () => asRole('keeper');
 const PNG = Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), Buffer.alloc(64, 1)]);
 const filesOnDisk = () => (fs.existsSync(path.join(uploadsDir, 'animals')) ? fs.readdirSync(path.join(uploadsDir, 'animals'), { recursive: true }).filter((f) => String(f).includes('.')) : []);
 let animalId = 0;
 
 beforeAll(async () => {
+  database = await openTestDatabase();
+  db = database.db;
+  app = createApp({ db, internalSecret: TEST_INTERNAL_SECRET, uploadsDir } as unknown as RecordsDeps);
   await migrateLatest(db);
   await seedDemoData(db);
   animalId = (await db('animals').first()).id;
 });
 afterAll(async () => {
-  await db.destroy();
+  await database.dispose();
   fs.rmSync(uploadsDir, { recursive: true, force: true });
 });
 

@@ -10,7 +10,7 @@ import { ApiError, NotFoundError, PayloadTooLargeError, ValidationError } from '
 import { allow } from '../../../../common/src/roles.js';
 import { parseOrThrow } from '../../../../common/src/validate.js';
 import { audit } from '../../audit/audit-log.js';
-import { nowIso } from '../../db/knex.js';
+import { insertId, nowIso } from '../../db/knex.js';
 import { KEEPERS } from '../shared/access.js';
 import { liveAnimal } from '../shared/animals-lookup.js';
 import { IMAGE_TYPES, MAX_PHOTO_BYTES, sniffImage } from './image-check.js';
@@ -83,7 +83,7 @@ export function photosRoutes(db: Knex, uploadsDir: string | undefined, stage: 'r
         let photoId: number;
         try {
           const now = nowIso();
-          [photoId] = (await db('animal_photos').insert({ animal_id: id, file_name: relative, content_type: image.type, size_bytes: file.size, created_at: now, updated_at: now })) as [number];
+          photoId = await insertId(db('animal_photos'), { animal_id: id, file_name: relative, content_type: image.type, size_bytes: file.size, created_at: now, updated_at: now });
         } catch (err) {
           await fs.rm(target, { force: true });
           throw err;

@@ -2,7 +2,7 @@ import type { Knex } from 'knex';
 import type { z } from 'zod';
 import type { Placement, Rack, Tub } from '../../../../../shared/api/collection-racks.js';
 import { ConflictError, NotFoundError, UnprocessableError } from '../../../../common/src/errors.js';
-import { nowIso } from '../../db/knex.js';
+import { insertId, isUniqueViolation, nowIso } from '../../db/knex.js';
 import { listPage, type ListParams } from '../../lib/list.js';
 import { tubSlots } from './rack-rules.js';
 
@@ -54,7 +54,7 @@ export async function createRack(db: Knex, input: { name: string; levels: number
   if (taken) throw new ConflictError(`A rack named ${input.name} exists already; tub labels would clash.`, 'name');
   const now = nowIso();
   return db.transaction(async (trx) => {
-    const [id] = await trx('racks').insert({ name: input.name, levels: input.levels, columns: input.columns, plan_id: input.planId, location: input.location, notes: input.notes, created_at: now, updated_at: now });
+    const id = await insertId(trx('racks'), { name: input.name, levels: input.levels, columns: input.columns, plan_id: input.planId, location: input.location, notes: input.notes, created_at: now, updated_at: now });
     const slots = tubSlots(input.name, input.levels, input.columns);
     await trx.batchInsert('tubs', slots.map((s) => ({ rack_id: id, ...s, created_at: now, updated_at: now })), 100);
     return id!;
@@ -148,7 +148,7 @@ export async function placeAnimal(db: Knex, animalId: number, tubId: number, at:
       await trx('animals').where({ id: animalId }).update({ location: tub.label, updated_at: now });
     });
   } catch (err) {
-    if (String((err as Error).message).includes('UNIQUE')) throw new ConflictError(`Tub ${tub.label} was just taken; reload the map.`, 'tubId');
+    if (isUniqueViolation(err)) throw new ConflictError(`Tub ${tub.label} was just taken; reload the map.`, 'tubId');
     throw err;
   }
   return { from: open ? open.tub_id : null, label: tub.label as string };
