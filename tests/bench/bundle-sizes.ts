@@ -28,7 +28,9 @@ export function bundleSizes(webDir: string): BundleSize[] {
   for (const name of ['planning', 'collection', 'orders', 'rack-sizer']) {
     const dir = path.join(webDir, name);
     const js = fs.readdirSync(dir).filter((f) => f.endsWith('.js'));
-    sizes.push({ name: `${name} element (all JS)`, gzipKiB: js.reduce((sum, f) => sum + gz(path.join(dir, f)), 0), targetKiB: 200 });
+    // The widget goes on other people's websites: its script and styles (inside it) must stay under 150 kB.
+    const targetKiB = name === 'rack-sizer' ? 146 : 200;
+    sizes.push({ name: `${name} element (all JS)`, gzipKiB: js.reduce((sum, f) => sum + gz(path.join(dir, f)), 0), targetKiB });
   }
   return sizes.map((s) => ({ ...s, gzipKiB: Math.round(s.gzipKiB * 10) / 10 }));
 }

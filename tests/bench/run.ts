@@ -4,6 +4,7 @@ import path from 'node:path';
 import { RACK_PLAN_EXAMPLE } from '../../shared/api/rack-plan.js';
 import { loadConfig } from '../../services/common/src/config.js';
 import { buildWeb } from '../../scripts/build-web.js';
+import { widgetFirstRender } from './widget-timing.js';
 import { prepareDatabase } from '../../scripts/lib/database.js';
 import { ROOT, startAll } from '../../scripts/lib/processes.js';
 import { bundleSizes } from './bundle-sizes.js';
@@ -56,6 +57,10 @@ if (wants('web') || wants('http')) {
       const timings = await moduleTimings(base);
       for (const t of timings) log(`${t.module.padEnd(12)} first visit ${t.firstVisitMs} ms, return visit ${t.returnVisitMs} ms`);
       results.moduleTimings = timings;
+      log('\n== Website widget: script load to first interactive render in Chromium (median of 10) ==');
+      const widget = await widgetFirstRender(base);
+      log(`tw-rack-sizer first render ${widget.medianMs} ms (samples ${widget.samplesMs.join(', ')})`);
+      results.widgetFirstRender = widget;
     }
     if (wants('http')) {
       log('\n== Rack-plan route through the gateway vs a bare Express route (autocannon, 16 connections, 8 s each) ==');

@@ -1,5 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { RACK_PLAN_EXAMPLE } from '../../../../shared/api/rack-plan.js';
 import { recordsTestApp } from '../test-support.js';
 import { acceptedOrder, builder, keeper, owner, payDeposit, sales } from './orders-test-helpers.js';
 
@@ -66,6 +67,20 @@ describe('production stages', () => {
 });
 
 describe('the order book', () => {
+  it("shows the builder an order's racks with their specs, for batch cutting and the doorway check", async () => {
+    const spec = { ...RACK_PLAN_EXAMPLE, cutting: { include: false } };
+    const { order } = await acceptedOrder(ctx.app, [
+      { kind: 'rack', spec, quantity: 2 },
+      { kind: 'item', description: 'Spare thermostat', quantity: 1, unitPriceCents: 4500 },
+    ]);
+    const res = await request(ctx.app).get(`/api/v1/orders/${order.id}`).set(builder());
+    expect(res.status).toBe(200);
+    // Only rack lines: the builder cuts racks, not thermostats.
+    expect(res.body.racks).toHaveLength(1);
+    expect(res.body.racks[0]).toMatchObject({ planId: null, quantity: 2, spec: { layout: RACK_PLAN_EXAMPLE.layout } });
+    expect(res.body.racks[0].description).toContain('9 x 3 tubs');
+  });
+
   it('lists orders for the production board by stage, readable by the builder and not the keeper', async () => {
     const { order } = await acceptedOrder(ctx.app);
     await payDeposit(ctx.app, ctx.stripeWebhookSecret, order.id);

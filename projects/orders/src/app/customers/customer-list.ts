@@ -1,17 +1,18 @@
 import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input, output } from '@angular/core';
+import { MatButton } from '@angular/material/button';
+import { MatIcon } from '@angular/material/icon';
 import { MatSortModule, Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
-import { ApiClient, DataTable, ListDefaults, ListQuery, PageHeader, fromSortParam, pagedList, toSortParam } from '@tubwright/kit';
+import { ApiClient, DataTable, ListQuery, PageHeader, fromSortParam, pagedList, toSortParam } from '@tubwright/kit';
+import { ShellLink } from '../core/shell-link';
 import { Customer, placeOf } from './customer';
-
-export const CUSTOMER_LIST_DEFAULTS: ListDefaults = { sort: 'name', limit: 25 };
 
 /** People and shops who buy racks: who they are and how to reach them. */
 @Component({
   selector: 'tw-customer-list',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [MatTableModule, MatSortModule, DataTable, PageHeader, DatePipe],
+  imports: [MatTableModule, MatSortModule, MatButton, MatIcon, DataTable, PageHeader, DatePipe, ShellLink],
   templateUrl: './customer-list.html',
   styleUrl: './customer-list.scss',
 })
