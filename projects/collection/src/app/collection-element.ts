@@ -1,25 +1,65 @@
 import { ChangeDetectionStrategy, Component, ViewEncapsulation, computed, input } from '@angular/core';
 import { MatButton } from '@angular/material/button';
-import { EmptyState, ListQuery, Session, adoptShellSession, injectShellNavigate, parseListPath, toListPath } from '@tubwright/kit';
-import { ANIMAL_LIST_DEFAULTS, AnimalList } from './animals/animal-list';
+import { EmptyState, Session, adoptShellSession, injectShellNavigate } from '@tubwright/kit';
+import { AnimalDetail } from './animals/animal-detail';
+import { AnimalList, AnimalListState } from './animals/animal-list';
+import { BreedingPage } from './breeding/breeding-page';
+import { PairingDetail } from './breeding/pairing-detail';
+import { CollectionNav } from './core/collection-nav';
+import { animalListPath, parseCollectionPath, sectionOf } from './core/collection-routes';
+import { EnvironmentView } from './environment/environment-view';
+import { DueList } from './feeding/due-list';
+import { FeedingDay } from './feeding/feeding-day';
+import { RackList } from './racks/rack-list';
+import { RackMap } from './racks/rack-map';
+import { TubLabels } from './racks/tub-labels';
 
-/** Routes of this module, as sub-paths the shell passes in `path`. */
-const LIST_ROUTES = ['', 'animals'];
-
-/** `<tw-collection>`: the keeper's animals as the console shows them. */
+/** `<tw-collection>`: animals, racks, feeding day, breeding and environment, as the console shows them. */
 @Component({
   selector: 'tw-collection-root',
   changeDetection: ChangeDetectionStrategy.OnPush,
   encapsulation: ViewEncapsulation.None,
-  imports: [AnimalList, EmptyState, MatButton],
+  imports: [CollectionNav, AnimalList, AnimalDetail, RackList, RackMap, TubLabels, DueList, FeedingDay, BreedingPage, PairingDetail, EnvironmentView, EmptyState, MatButton],
   styleUrl: './collection-element.scss',
   template: `
-    @if (isList()) {
-      <tw-animal-list [query]="view().query" (queryChange)="showList($event)" />
-    } @else {
-      <tw-empty-state icon="explore_off" heading="The collection has no page here" [hint]="'Nothing lives at “' + view().route + '”.'">
-        <button mat-flat-button type="button" (click)="navigate('')">Open the animal list</button>
-      </tw-empty-state>
+    @let v = view();
+    <tw-collection-nav [active]="section()" />
+    @switch (v.page) {
+      @case ('animals') {
+        <tw-animal-list [query]="v.query" [filters]="v.filters" (stateChange)="showList($event)" />
+      }
+      @case ('animal') {
+        <tw-animal-detail [animalId]="v.id" />
+      }
+      @case ('racks') {
+        <tw-rack-list />
+      }
+      @case ('rack') {
+        <tw-rack-map [rackId]="v.id" />
+      }
+      @case ('labels') {
+        <tw-tub-labels [rackId]="v.id" />
+      }
+      @case ('due') {
+        <tw-due-list [date]="v.date" />
+      }
+      @case ('feeding') {
+        <tw-feeding-day [rackId]="v.rackId" />
+      }
+      @case ('breeding') {
+        <tw-breeding-page />
+      }
+      @case ('pairing') {
+        <tw-pairing-detail [pairingId]="v.id" />
+      }
+      @case ('environment') {
+        <tw-environment-view [rackId]="v.rackId" />
+      }
+      @default {
+        <tw-empty-state icon="explore_off" heading="The collection has no page here" [hint]="'Nothing lives at “' + path() + '”.'">
+          <button mat-flat-button type="button" (click)="navigate('')">Open the animal list</button>
+        </tw-empty-state>
+      }
     }
   `,
 })
@@ -28,15 +68,16 @@ export class CollectionElement {
   readonly session = input<Session | null>(null);
 
   protected readonly navigate = injectShellNavigate();
-  protected readonly view = computed(() => parseListPath(this.path() ?? '', ANIMAL_LIST_DEFAULTS));
-  protected readonly isList = computed(() => LIST_ROUTES.includes(this.view().route));
+  protected readonly view = computed(() => parseCollectionPath(this.path()));
+  protected readonly section = computed(() => sectionOf(this.view()));
 
   constructor() {
     adoptShellSession(this.session);
   }
 
-  protected showList(query: ListQuery): void {
-    const onlyFilter = query.q !== this.view().query.q;
-    this.navigate(toListPath(this.view().route, query, ANIMAL_LIST_DEFAULTS), { replace: onlyFilter });
+  protected showList(state: AnimalListState): void {
+    const current = this.view();
+    const onlyFilter = current.page === 'animals' && state.query.q !== current.query.q;
+    this.navigate(animalListPath(state.query, state.filters), { replace: onlyFilter });
   }
 }

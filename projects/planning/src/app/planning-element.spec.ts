@@ -12,7 +12,7 @@ describe('PlanningElement', () => {
 
   it('lists tub models for the path it is given and takes over the shell session', async () => {
     const fixture = TestBed.createComponent(PlanningElement);
-    fixture.componentRef.setInput('path', '?q=deep&offset=25');
+    fixture.componentRef.setInput('path', 'tub-models?q=deep&offset=25');
     fixture.componentRef.setInput('session', {
       accessToken: 'from-shell',
       refreshToken: 'r',
@@ -25,6 +25,18 @@ describe('PlanningElement', () => {
     expect(request.request.params.get('q')).toBe('deep');
     expect(request.request.params.get('offset')).toBe('25');
     expect(TestBed.inject(AuthSession).accessToken()).toBe('from-shell');
+  });
+
+  it('opens the saved plans at its root and marks the section in its navigation', async () => {
+    const fixture = TestBed.createComponent(PlanningElement);
+    fixture.componentRef.setInput('path', '');
+    await fixture.whenStable();
+
+    const request = TestBed.inject(HttpTestingController).expectOne((r) => r.url === '/api/v1/plans');
+    expect(request.request.params.get('status')).toBe('active');
+    expect(request.request.params.get('sort')).toBe('-updatedAt');
+    const current = (fixture.nativeElement as HTMLElement).querySelector('nav a[aria-current="page"]');
+    expect(current?.textContent?.trim()).toBe('Saved plans');
   });
 
   it('asks the shell to navigate with a bubbling tw-navigate event', async () => {

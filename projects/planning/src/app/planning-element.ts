@@ -1,25 +1,54 @@
 import { ChangeDetectionStrategy, Component, ViewEncapsulation, computed, input } from '@angular/core';
 import { MatButton } from '@angular/material/button';
-import { EmptyState, ListQuery, Session, adoptShellSession, injectShellNavigate, parseListPath, toListPath } from '@tubwright/kit';
-import { TUB_MODEL_LIST_DEFAULTS, TubModelList } from './tub-models/tub-model-list';
+import { EmptyState, ListQuery, Session, adoptShellSession, injectShellNavigate } from '@tubwright/kit';
+import { PlanEditor } from './plan-editor/plan-editor';
+import { PlanningSection, parsePlanningPath, planListPath, sectionOf, tubModelListPath } from './planning-routes';
+import { PriceListPage } from './price-list/price-list-page';
+import { PlanList } from './saved-plans/plan-list';
+import { TubModelForm } from './tub-models/tub-model-form';
+import { TubModelList } from './tub-models/tub-model-list';
 
-/** Routes of this module, as sub-paths the shell passes in `path`. */
-const LIST_ROUTES = ['', 'tub-models'];
+const SECTIONS: Array<{ id: PlanningSection; path: string; label: string }> = [
+  { id: 'plans', path: 'plans', label: 'Saved plans' },
+  { id: 'tub-models', path: 'tub-models', label: 'Tub models' },
+  { id: 'price-list', path: 'price-list', label: 'Price list' },
+];
 
 /** `<tw-planning>`: the planning module as the console shows it. */
 @Component({
   selector: 'tw-planning-root',
   changeDetection: ChangeDetectionStrategy.OnPush,
   encapsulation: ViewEncapsulation.None,
-  imports: [TubModelList, EmptyState, MatButton],
+  imports: [PlanList, PlanEditor, TubModelList, TubModelForm, PriceListPage, EmptyState, MatButton],
   styleUrl: './planning-element.scss',
   template: `
-    @if (isList()) {
-      <tw-tub-model-list [query]="view().query" (queryChange)="showList($event)" />
-    } @else {
-      <tw-empty-state icon="explore_off" heading="Planning has no page here" [hint]="'Nothing lives at “' + view().route + '”.'">
-        <button mat-flat-button type="button" (click)="navigate('')">Open tub models</button>
-      </tw-empty-state>
+    <nav class="tw-planning-nav" aria-label="Planning">
+      @for (s of sections; track s.id) {
+        <a [href]="'/planning/' + s.path" [attr.aria-current]="section() === s.id ? 'page' : null" (click)="follow($event, s.path)">{{ s.label }}</a>
+      }
+    </nav>
+    @let v = view();
+    @switch (v.page) {
+      @case ('plans') {
+        <tw-plan-list [query]="v.query" [archived]="v.archived" (queryChange)="showPlans($event.query, $event.archived)" (open)="navigate($event)" />
+      }
+      @case ('plan') {
+        <tw-plan-editor [planId]="v.id" [tubModelId]="v.tubModelId" [navigate]="navigate" />
+      }
+      @case ('tub-models') {
+        <tw-tub-model-list [query]="v.query" (queryChange)="showTubModels($event)" (open)="navigate($event)" />
+      }
+      @case ('tub-model') {
+        <tw-tub-model-form [tubModelId]="v.id" [navigate]="navigate" />
+      }
+      @case ('price-list') {
+        <tw-price-list-page />
+      }
+      @default {
+        <tw-empty-state icon="explore_off" heading="Planning has no page here" [hint]="'Nothing lives at “' + path() + '”.'">
+          <button mat-flat-button type="button" (click)="navigate('')">Open saved plans</button>
+        </tw-empty-state>
+      }
     }
   `,
 })
@@ -28,15 +57,30 @@ export class PlanningElement {
   readonly session = input<Session | null>(null);
 
   protected readonly navigate = injectShellNavigate();
-  protected readonly view = computed(() => parseListPath(this.path() ?? '', TUB_MODEL_LIST_DEFAULTS));
-  protected readonly isList = computed(() => LIST_ROUTES.includes(this.view().route));
+  protected readonly sections = SECTIONS;
+  protected readonly view = computed(() => parsePlanningPath(this.path() ?? ''));
+  protected readonly section = computed(() => sectionOf(this.view()));
 
   constructor() {
     adoptShellSession(this.session);
   }
 
-  protected showList(query: ListQuery): void {
-    const onlyFilter = query.q !== this.view().query.q;
-    this.navigate(toListPath(this.view().route, query, TUB_MODEL_LIST_DEFAULTS), { replace: onlyFilter });
+  /** A plain click stays in the console; a modified one opens the link as the browser would. */
+  protected follow(event: MouseEvent, path: string): void {
+    if (event.button !== 0 || event.metaKey || event.ctrlKey || event.shiftKey || event.altKey) return;
+    event.preventDefault();
+    this.navigate(path);
+  }
+
+  protected showPlans(query: ListQuery, archived: boolean): void {
+    const current = this.view();
+    const onlyFilter = current.page === 'plans' && query.q !== current.query.q;
+    this.navigate(planListPath(query, archived), { replace: onlyFilter });
+  }
+
+  protected showTubModels(query: ListQuery): void {
+    const current = this.view();
+    const onlyFilter = current.page === 'tub-models' && query.q !== current.query.q;
+    this.navigate(tubModelListPath(query), { replace: onlyFilter });
   }
 }

@@ -35,8 +35,8 @@ describe('TubModelList', () => {
     await fixture.whenStable();
 
     expect(cells(element)).toEqual([
-      ['Deep 41', 'Kettleford', '34 1/8 in', '16 9/16 in', '6 1/2 in', '41 qt'],
-      ['Hatchling 6Lids sold apart', 'Kettleford', '16 in', '11 1/4 in', '4 1/8 in', '—'],
+      ['Deep 41', 'Kettleford', '34 1/8 in', '16 9/16 in', '6 1/2 in', '41 qt', ''],
+      ['Hatchling 6Lids sold apart', 'Kettleford', '16 in', '11 1/4 in', '4 1/8 in', '—', ''],
     ]);
     expect(element.querySelector('.mat-mdc-paginator-range-label')?.textContent?.trim()).toBe('26 – 27 of 27');
     backend.verify();

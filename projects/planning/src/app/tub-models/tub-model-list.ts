@@ -1,27 +1,36 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, output } from '@angular/core';
+import { MatButton } from '@angular/material/button';
 import { MatSortModule, Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
-import { ApiClient, DataTable, LengthPipe, ListDefaults, ListQuery, PageHeader, fromSortParam, pagedList, toSortParam } from '@tubwright/kit';
+import { ApiClient, AuthSession, DataTable, LengthPipe, ListQuery, PageHeader, fromSortParam, pagedList, toSortParam } from '@tubwright/kit';
 import { TubModel } from './tub-model';
-
-export const TUB_MODEL_LIST_DEFAULTS: ListDefaults = { sort: 'name', limit: 25 };
 
 /** The shop's tub models: the outside sizes every rack is planned around. */
 @Component({
   selector: 'tw-tub-model-list',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [MatTableModule, MatSortModule, DataTable, PageHeader, LengthPipe],
+  imports: [MatTableModule, MatSortModule, MatButton, DataTable, PageHeader, LengthPipe],
   templateUrl: './tub-model-list.html',
   styleUrl: './tub-model-list.scss',
 })
 export class TubModelList {
   readonly query = input.required<ListQuery>();
   readonly queryChange = output<ListQuery>();
+  /** A sub-path to show: a tub model's form, or a new plan for the tub. */
+  readonly open = output<string>();
 
   private readonly api = inject(ApiClient);
   protected readonly list = pagedList(this.query, (q) => this.api.list<TubModel>('/tub-models', q));
   protected readonly sort = computed(() => fromSortParam(this.query().sort));
-  protected readonly columns = ['name', 'maker', 'lengthIn', 'widthIn', 'heightIn', 'volumeQt'];
+  protected readonly columns = ['name', 'maker', 'lengthIn', 'widthIn', 'heightIn', 'volumeQt', 'actions'];
+  private readonly auth = inject(AuthSession);
+  protected readonly canWrite = computed(() => ['owner', 'builder'].includes(this.auth.role() ?? ''));
+
+  protected go(event: MouseEvent, path: string): void {
+    if (event.button !== 0 || event.metaKey || event.ctrlKey || event.shiftKey) return;
+    event.preventDefault();
+    this.open.emit(path);
+  }
 
   protected sortBy(sort: Sort): void {
     this.queryChange.emit({ ...this.query(), sort: toSortParam(sort.active, sort.direction), offset: 0 });

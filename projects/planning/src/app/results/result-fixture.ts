@@ -1,0 +1,140 @@
+import type { RackPlanRequest, RackPlanResponse } from '../shared/plan-types';
+
+/**
+ * A trimmed calculator answer for the 23 x 16 1/4 x 6 1/2 in tub, 9 levels x 3 columns, as
+ * POST /api/v1/calc/rack-plan gave it (only the members the panels read are filled).
+ */
+export function nineByThree(): { request: RackPlanRequest; result: RackPlanResponse } {
+  const request = {
+    unit: 'in',
+    tub: { length: 23, width: 16.25, height: 6.5 },
+    layout: { levels: 9, columns: 3, dividers: 0 },
+    allowances: {},
+    construction: { panelThickness: 0.5, dividerThickness: 0.5, carcassMaterial: 'pvc-rigid', bottomMaterial: 'plywood', backPanel: false },
+    sections: {},
+    base: { lockingCasters: 2 },
+    heat: { enabled: true, wattsPerFoot: 10, supplyVoltage: 120, thermostatRatingW: 500 },
+    joints: {},
+    limits: { tipRatio: 2.5 },
+    prices: {},
+    cutting: { include: true, timeLimitMs: 500 },
+  } as unknown as RackPlanRequest;
+  const result = {
+    unit: 'in',
+    dimensions: {
+      levelOpening: 6.625,
+      interiorShelfLength: 50.25,
+      outerShelfLength: 51.25,
+      depth: 23.5,
+      carcassHeight: 64.625,
+      baseHeight: 7,
+      overallHeight: 71.625,
+      overallWidth: 51.25,
+      overallDepth: 23.5,
+    },
+    sections: [{ index: 1, levels: 9, firstLevel: 1, sidePanelHeight: 63.625, height: 64.625, hasBottomPanel: true, dowels: 0 }],
+    parts: [
+      { key: 'side-panel', name: 'side panel', material: 'pvc-rigid', length: 63.625, width: 23.5, thickness: 0.5, quantity: 2, section: 1 },
+      { key: 'interior-shelf', name: 'interior shelf', material: 'pvc-rigid', length: 50.25, width: 23.5, thickness: 0.5, quantity: 8, section: 1 },
+      { key: 'base-rail', name: 'base rail', material: 'lumber-2x4', length: 51.25, width: 3.5, thickness: 1.5, quantity: 2, section: null },
+    ],
+    hardware: [{ key: 'caster', name: 'caster', quantity: 4, unit: 'each', basis: '6 casters, 2 of them locking' }],
+    heat: {
+      enabled: true,
+      strips: 9,
+      stripLength: 48.25,
+      stripPowerW: 40.208,
+      wattsPerFoot: 10,
+      totalTapeFeet: 36.188,
+      totalPowerW: 361.875,
+      supplyVoltageV: 120,
+      currentA: 3.016,
+      thermostats: 1,
+      stripsPerThermostat: 12,
+      thermostatRatingW: 500,
+      circuits: [
+        { ratingA: 15, voltageV: 120, capacityW: 1800, continuousLimitW: 1440, share: 0.251 },
+        { ratingA: 20, voltageV: 120, capacityW: 2400, continuousLimitW: 1920, share: 0.188 },
+      ],
+      cautions: ["Follow the thermostat maker's rating: never connect more heat tape to one thermostat than it is rated to switch."],
+    },
+    loads: {
+      emptyMassLb: 380.725,
+      emptyMassKg: 172.694,
+      tubsMassLb: 121.5,
+      tubsMassKg: 55.111,
+      loadedMassLb: 502.225,
+      loadedMassKg: 227.806,
+      casters: 6,
+      loadPerCasterLb: 100.445,
+      loadPerCasterKg: 45.561,
+      casterRatingLb: 200,
+      casterRatingKg: 90.718,
+      shelfMaterial: 'pvc-rigid',
+      shelfModulusPsi: 333587,
+      shelfModulusMPa: 2300,
+      shelfModulusHeated: true,
+      longestSpanUnsupported: 49.25,
+      sagUnsupported: 0.818651,
+      longestSpanSupported: 16.416667,
+      sagSupported: 0.010107,
+      supportBlocksUsed: true,
+      supportColumns: 2,
+      levels: [{ level: 1, floorSag: 0.006596, ceilingSag: 0.010107, lidGap: 0.121489 }],
+      heightToDepth: 3.048,
+    },
+    checks: [
+      { code: 'caster_load', severity: 'info', message: 'Each caster carries up to 100 lb of its 200 lb rating.', basis: 'loaded mass / (casters - 1)' },
+      { code: 'tipping', severity: 'warning', message: 'The rack is 3.0 times as tall as it is deep: anchor it to the wall and lock the casters.', basis: 'overall height / overall depth > 2.5' },
+    ],
+    cost: {
+      lines: [],
+      subtotals: { materials: 1397, hardware: 77.12, heat: 219.5, labor: 305.33 },
+      subtotal: 1998.95,
+      laborMinutes: 458,
+      labor: 305.33,
+      marginPercent: 30,
+      margin: 599.68,
+      total: 2598.63,
+      sheets: [
+        { material: 'pvc-rigid', thickness: 0.5, count: 6, method: 'nested' },
+        { material: 'plywood', thickness: 0.5, count: 1, method: 'nested' },
+      ],
+      notes: [],
+    },
+    display: { dimensions: {}, sections: [], parts: [] },
+    cutting: {
+      unit: 'in',
+      timedOut: false,
+      materials: [
+        {
+          material: 'pvc-rigid@0.5',
+          kind: 'sheet',
+          stockUsed: 7,
+          lowerBound: 6,
+          optimal: false,
+          yield: 0.505269,
+          layouts: [
+            { stock: 0, count: 1, placements: [{ part: 0, x: 0, y: 0, length: 63.625, width: 23.5, rotated: false }, { part: 1, x: 0, y: 23.625, length: 50.25, width: 23.5, rotated: false }], cuts: [], offcuts: [] },
+            { stock: 0, count: 6, placements: [{ part: 1, x: 0, y: 0, length: 50.25, width: 23.5, rotated: false }], cuts: [], offcuts: [] },
+          ],
+        },
+        {
+          material: 'lumber-2x4',
+          kind: 'board',
+          stockUsed: 1,
+          lowerBound: 1,
+          optimal: true,
+          yield: 0.97619,
+          layouts: [{ stock: 1, count: 1, placements: [{ part: 2, x: 0, y: 0, length: 51.25, width: 0, rotated: false }], cuts: [], offcuts: [] }],
+        },
+      ],
+      svg: [
+        '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 96 48"><title>96 × 48 × 1</title></svg>',
+        '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 96 48"><title>96 × 48 × 6</title></svg>',
+        '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 168 8.4"><title>168 × 1</title></svg>',
+      ],
+    },
+  } as unknown as RackPlanResponse;
+  return { request, result };
+}
