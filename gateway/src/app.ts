@@ -96,6 +96,11 @@ export function createGatewayApp(deps: GatewayDeps): express.Express {
     req.identity = { kind: 'gateway', sub: 'payments-webhook', role: 'system', iat: 0 };
     next('route');
   });
+  // A customer opens their quote from its e-mail with no account: the link's signature is checked by the records service.
+  app.use('/api/v1/quote-links', (req, _res, next) => {
+    req.identity = { kind: 'gateway', sub: 'customer-link', role: 'system', iat: 0 };
+    next();
+  });
   app.use('/api/v1', bodySizeCap());
   // Everything else under /api/v1 needs an API key (partners, the website widget) or a signed-in user.
   app.use('/api/v1', apiKeyAuth(services.records, keyChecks), ...apiKeyRateLimits(deps.apiKeyRateLimitPerMinute ?? 300, deps.widgetIpRateLimitPerMinute ?? 60));

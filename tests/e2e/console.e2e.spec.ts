@@ -67,48 +67,89 @@ describe('the console', () => {
   });
 
   it("shows the owner the shop's activity, newest first", async () => {
+    // A change of our own to find, whatever ran before.
+    const made = await fetch(`${baseUrl}/api/v1/users`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', authorization: `Bearer ${await ownerToken()}` },
+      body: JSON.stringify({ email: 'new.builder@demo.tubwright.test', name: 'New Builder', role: 'builder', password: 'new-builder-password' }),
+    });
+    expect(made.status).toBe(201);
     await signIn(page, baseUrl, 'owner@demo.tubwright.test');
     await page.getByRole('navigation', { name: 'Modules' }).getByRole('link', { name: /Activity/ }).click();
     await page.getByRole('table', { name: 'Changes' }).waitFor();
-    await page.getByRole('cell', { name: 'create' }).first().waitFor();
+    await page.getByRole('cell', { name: /new\.builder@demo\.tubwright\.test/ }).first().waitFor();
     await page.screenshot({ path: path.join(SCREENSHOTS, 'console-activity.png') });
     await signOut(page);
   });
 
+  it('lets a customer accept a quote from the link in its e-mail, with no account', async () => {
+    const auth = { 'content-type': 'application/json', authorization: `Bearer ${await ownerToken()}` };
+    const made = await fetch(`${baseUrl}/api/v1/quotes`, {
+      method: 'POST',
+      headers: auth,
+      body: JSON.stringify({ customerId: 2, lines: [{ kind: 'item', description: 'Thermostat, 500 W', quantity: 1, unitPriceCents: 4500 }] }),
+    });
+    const quote = (await made.json()) as { id: number; number: string };
+    expect((await fetch(`${baseUrl}/api/v1/quotes/${quote.id}/send`, { method: 'POST', headers: auth })).status).toBe(200);
+    const link = await linkFromCatcher(new RegExp(quote.number), /https?:\/\/\S+\/quote\/\S+/);
+    await page.goto(link);
+    await page.getByRole('heading', { name: new RegExp(`Quote ${quote.number}`) }).waitFor();
+    await page.getByLabel('Please deliver it').check();
+    await page.getByLabel('Delivery address').fill('12 Fern Lane, Millbrook');
+    await page.screenshot({ path: path.join(SCREENSHOTS, 'customer-quote.png') });
+    await page.getByRole('button', { name: 'Accept this quote' }).click();
+    await page.getByRole('status').getByText(/Your order is O-\d{4}-\d{4}/).waitFor();
+    expect(refused).toEqual([]);
+  });
+
   it('lets someone who forgot a password choose a new one from the e-mailed link', async () => {
+    // A user of its own: the other browser tests sign in with the demo passwords on the same stack.
+    const email = 'forgetful.keeper@demo.tubwright.test';
+    const made = await fetch(`${baseUrl}/api/v1/users`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', authorization: `Bearer ${await ownerToken()}` },
+      body: JSON.stringify({ email, name: 'Forgetful Keeper', role: 'keeper', password: 'first-password-1' }),
+    });
+    expect(made.status).toBe(201);
     await page.goto(`${baseUrl}/sign-in`);
     await page.getByRole('link', { name: 'Forgot your password?' }).click();
-    await page.getByLabel('E-mail').fill('sales@demo.tubwright.test');
+    await page.getByLabel('E-mail').fill(email);
     await page.getByRole('button', { name: 'Send the link' }).click();
     await page.getByRole('status').getByText(/reset link is on its way/).waitFor();
-    const link = await resetLinkFromCatcher('sales@demo.tubwright.test');
+    const link = await resetLinkFromCatcher(email);
     await page.goto(link);
-    await page.getByLabel('New password', { exact: true }).fill('sales-fresh-password');
+    await page.getByLabel('New password', { exact: true }).fill('keeper-fresh-password');
     await page.getByRole('button', { name: 'Save the new password' }).click();
     await page.getByRole('status').getByText(/Password changed/).waitFor();
     await page.getByRole('link', { name: 'Back to sign-in' }).click();
-    await signIn(page, baseUrl, 'sales@demo.tubwright.test', 'sales-fresh-password');
+    await signIn(page, baseUrl, email, 'keeper-fresh-password');
     await signOut(page);
     expect(refused).toEqual([]);
   });
 });
 
-/** The newest reset link mailed to this address, read from the mail catcher through the gateway as the owner. */
-async function resetLinkFromCatcher(email: string): Promise<string> {
+async function ownerToken(): Promise<string> {
   const login = await fetch(`${baseUrl}/api/v1/auth/login`, {
     method: 'POST',
     headers: { 'content-type': 'application/json' },
     body: JSON.stringify({ email: 'owner@demo.tubwright.test', password: 'tubwright-demo' }),
   });
-  const { accessToken } = (await login.json()) as { accessToken: string };
+  return ((await login.json()) as { accessToken: string }).accessToken;
+}
+
+/** The newest reset link mailed to this address, read from the mail catcher through the gateway as the owner. */
+const resetLinkFromCatcher = (email: string) => linkFromCatcher(/reset your password/, /https?:\/\/\S+token=\S+/, email);
+
+async function linkFromCatcher(subject: RegExp, pattern: RegExp, email?: string): Promise<string> {
+  const accessToken = await ownerToken();
   for (let attempt = 0; attempt < 20; attempt++) {
     const auth = { authorization: `Bearer ${accessToken}` };
     const list = (await (await fetch(`${baseUrl}/api/v1/mail/messages?limit=50`, { headers: auth })).json()) as { items?: { id: number; to: string[]; subject: string }[] };
-    const summary = (list.items ?? []).find((m) => m.to.includes(email) && /reset your password/.test(m.subject));
+    const summary = (list.items ?? []).find((m) => (!email || m.to.includes(email)) && subject.test(m.subject));
     const mail = summary && ((await (await fetch(`${baseUrl}/api/v1/mail/messages/${summary.id}`, { headers: auth })).json()) as { text: string });
-    const link = mail?.text.match(/https?:\/\/\S+token=\S+/)?.[0];
+    const link = mail?.text.match(pattern)?.[0];
     if (link) return link;
     await new Promise((r) => setTimeout(r, 250));
   }
-  throw new Error(`no reset mail to ${email}`);
+  throw new Error(`no mail matching ${subject}`);
 }

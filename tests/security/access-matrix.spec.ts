@@ -86,8 +86,8 @@ describe('access matrix', () => {
         // The health report answers 503 when a neighbour is down (the payments stand-in is not started here).
         if (res.status >= 500 && route.path !== '/api/v1/health') mismatches.push(`${method} ${route.path} as ${caller.name}: ${res.status} ${JSON.stringify(res.body)}`);
         const expected = isPublic
-          ? caller.kind === 'key' && route.path === '/api/v1/payments/webhook'
-            ? 'refused' // a key is never a payment provider
+          ? caller.kind === 'key' && (route.path === '/api/v1/payments/webhook' || route.path.startsWith('/api/v1/quote-links/'))
+            ? 'refused' // a key is never a payment provider, nor the customer holding a quote link
             : 'allowed'
           : caller.kind === 'nobody' || (caller.kind === 'key' && route.path === '/api/v1/auth/logout') // a key has no session to end
             ? 'unauthenticated'

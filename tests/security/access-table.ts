@@ -64,6 +64,7 @@ export const ACCESS_TABLE: Rule[] = [
 
   // Orders: sales run them; builders see orders and move them through production.
   ['* /api/v1/customers', SALES],
+  ['* /api/v1/quote-links/', ['public']],
   ['* /api/v1/quotes', SALES],
   ['GET /api/v1/orders/:id/payments', SALES],
   ['GET /api/v1/orders', [O, S, B]],

@@ -1,3 +1,4 @@
+import { CustomerQuote, QuoteLinkAcceptRequest, QuoteLinkParams } from '../../../shared/api/quote-links.js';
 import { IdParams } from '../../../shared/api/common.js';
 import {
   AcceptQuoteRequest,
@@ -79,4 +80,20 @@ documentRoutes(
   { method: 'post', path: '/api/v1/orders/:id/invoices', tag: 'invoices', summary: 'Issue the invoice of an order and e-mail it', roles: SALES, params: IdParams, success: { status: 201, schema: InvoiceDetail, description: 'Issued' }, errors: [404, 409] },
 
   { method: 'get', path: '/api/v1/mail-log', tag: 'mail', summary: 'What was e-mailed to customers', roles: SALES, query: MailLogQuery, success: { status: 200, schema: MailLogPage, description: 'One page' } },
+);
+
+documentRoutes(
+  {
+    method: 'get', path: '/api/v1/quote-links/:token', tag: 'quotes', summary: "The customer's view of a sent quote, by the link in its e-mail", roles: [], params: QuoteLinkParams,
+    success: { status: 200, schema: CustomerQuote, description: 'The quote as the customer sees it' }, errors: [404],
+    description: 'No account needed: the token in the link is signed by the shop and replaced when the quote is sent again.',
+  },
+  {
+    method: 'post', path: '/api/v1/quote-links/:token/accept', tag: 'quotes', summary: 'The customer accepts the quote (makes the order)', roles: [], params: QuoteLinkParams, body: QuoteLinkAcceptRequest,
+    bodyExample: { deliveryMethod: 'pickup' }, success: { status: 201, schema: CustomerQuote, description: 'Accepted; orderNumber names the new order' }, errors: [404, 409],
+  },
+  {
+    method: 'post', path: '/api/v1/quote-links/:token/decline', tag: 'quotes', summary: 'The customer declines the quote', roles: [], params: QuoteLinkParams,
+    success: { status: 200, schema: CustomerQuote, description: 'Declined' }, errors: [404, 409],
+  },
 );

@@ -2,6 +2,8 @@ import fs from 'node:fs';
 import path from 'node:path';
 import express, { Router } from 'express';
 
+const ASSET = /\.(?:js|mjs|css|map|svg|png|jpe?g|gif|webp|ico|woff2?|ttf|json|txt|webmanifest|html)$/i;
+
 export const ELEMENT_NAMES = ['planning', 'collection', 'orders', 'rack-sizer'] as const;
 
 /** The public widget's one script, as a shop's website includes it. */
@@ -20,7 +22,8 @@ export function staticWeb(webDir: string): Router {
   const shellDir = path.join(webDir, 'shell');
   router.use(express.static(shellDir, { index: false, maxAge: '1h', setHeaders: noCacheForHtml }));
   router.get('/{*path}', (req, res, next) => {
-    if (req.path.startsWith('/api/') || path.extname(req.path)) return next();
+    // A missing file (an asset) is a 404, but a console path may hold a dot (a quote link's signature).
+    if (req.path.startsWith('/api/') || ASSET.test(req.path)) return next();
     const index = path.join(shellDir, 'index.html');
     if (!fs.existsSync(index)) {
       res.status(503).type('text').send('The console is not built yet: run `npm run build` (npm start does it for you).');

@@ -11,6 +11,7 @@ import { collectionRoutes } from './collection/collection-routes.js';
 import { customersRoutes } from './customers/customers-routes.js';
 import { ordersRoutes } from './orders/orders-routes.js';
 import { plansRoutes } from './plans/plans-routes.js';
+import { quoteLinksRoutes } from './orders/quote-links-routes.js';
 import { quoteRequestsRoutes } from './quote-requests/quote-requests-routes.js';
 import { tubModelsRoutes } from './tub-models/tub-models-routes.js';
 import { auditRoutes } from './audit/audit-routes.js';
@@ -28,6 +29,8 @@ export interface RecordsDeps {
   uploadsDir: string;
   /** How long a sign-in lasts without being refreshed (the refresh token's lifetime). */
   sessionTtlS?: number;
+  /** The console's public address, for links in e-mail (password resets, quotes). */
+  publicUrl?: string;
 }
 
 /** The records service: every business record, behind the gateway only. */
@@ -58,6 +61,7 @@ export function createApp(deps: RecordsDeps): express.Express {
   app.use(collectionRoutes(deps, 'json'));
   app.use(ordersRoutes(deps, 'json'));
   app.use(quoteRequestsRoutes(deps));
+  app.use(quoteLinksRoutes(deps));
   app.use(notFoundHandler);
   app.use(errorHandler());
   return app;

@@ -15,6 +15,7 @@ const app = createApp({
   internalSecret: config.internalSecret,
   uploadsDir: path.join(config.dataDir, 'uploads'),
   sessionTtlS: config.refreshTokenTtlS,
+  publicUrl: config.publicUrl,
   calculator: new CalculatorClient(config.calculatorUrls[0]!, config.internalSecret),
   mailer: new Mailer({ host: config.host, port: config.smtpPort }, config.mailFrom),
   payments: {

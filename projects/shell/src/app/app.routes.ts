@@ -24,6 +24,11 @@ export const routes: Routes = [
     loadComponent: () => import('./sign-in/sign-in').then((m) => m.SignIn),
   },
   {
+    path: 'quote/:token',
+    title: 'Your quote · Tubwright',
+    loadComponent: () => import('./customer-quote/customer-quote').then((m) => m.CustomerQuotePage),
+  },
+  {
     path: 'reset-password',
     title: 'Reset password · Tubwright',
     loadComponent: () => import('./password-reset/password-reset').then((m) => m.PasswordReset),

@@ -57,7 +57,8 @@ export async function sendLogged(db: Knex, mailer: Mailer, mail: OutgoingMail, n
 }
 
 /** The quote as text and HTML: every line, the totals and the deposit asked. */
-export function quoteMail(quote: QuoteItem, to: string, shop: string, pdf: Buffer | null): OutgoingMail {
+/** `link` is the customer's page to accept or decline without an account. */
+export function quoteMail(quote: QuoteItem, to: string, shop: string, pdf: Buffer | null, link?: string): OutgoingMail {
   const money = (c: number) => formatCents(c, quote.currency);
   const subject = `${shop}: quote ${quote.number}`;
   const totals: [string, number][] = [
@@ -77,7 +78,8 @@ export function quoteMail(quote: QuoteItem, to: string, shop: string, pdf: Buffe
     ...totals.map(([label, c]) => `${label}: ${money(c)}`),
     ...(quote.notes ? ['', quote.notes] : []),
     '',
-    `Reply to this message to accept or to change anything.`,
+    ...(link ? [`Accept or decline it here: ${link}`, ''] : []),
+    `Reply to this message to change anything.`,
     shop,
   ].join('\n');
   const row = (cells: string[], tag = 'td') => `<tr>${cells.map((c, i) => `<${tag}${i > 0 ? ' style="text-align:right"' : ''}>${c}</${tag}>`).join('')}</tr>`;
@@ -90,7 +92,8 @@ export function quoteMail(quote: QuoteItem, to: string, shop: string, pdf: Buffe
     ...totals.map(([label, c]) => row([`<strong>${escapeHtml(label)}</strong>`, '', money(c)])),
     '</table>',
     ...(quote.notes ? [`<p>${escapeHtml(quote.notes)}</p>`] : []),
-    `<p>Reply to this message to accept or to change anything.</p><p>${escapeHtml(shop)}</p>`,
+    ...(link ? [`<p><a href="${escapeHtml(link)}">Accept or decline the quote</a></p>`] : []),
+    `<p>Reply to this message to change anything.</p><p>${escapeHtml(shop)}</p>`,
   ].join('\n');
   return {
     to,

@@ -15,6 +15,7 @@ import { notifyOrder, quoteMail, sendLogged, shopName } from './mail-notices.js'
 import { readOrderSettings } from './order-settings.js';
 import { findOrder, orderFromQuote, type DeliveryInput } from './orders-store.js';
 import { priceRack } from './rack-pricing.js';
+import { quoteLinkToken, quoteLinkUrl } from './quote-link-token.js';
 import { findQuote, insertQuote, isoDatePlusDays, QUOTE_COLUMNS, quotesQuery, toQuoteSummary, updateDraftQuote, type QuoteItem, type ResolvedLine } from './quotes-store.js';
 import { percentToBp } from './quote-totals.js';
 
@@ -160,10 +161,12 @@ export function quotesRoutes(deps: RecordsDeps): Router {
       // Sending again (a lost message) is allowed until the customer decides.
       if (quote.status !== 'draft' && quote.status !== 'sent') throw new ConflictError(`Quote ${quote.number} is ${quote.status}; it cannot be sent.`);
       const customer = (await db('customers').where({ id: quote.customerId }).first()) as { email: string };
-      const mail = quoteMail(quote, customer.email, await shopName(db), await quotePdf(deps, quote));
+      // The link is signed over this sending's time: a newer e-mail replaces older links.
+      const now = nowIso();
+      const link = quoteLinkUrl(deps.publicUrl ?? 'http://127.0.0.1:4300', quoteLinkToken(deps.internalSecret, quote, now));
+      const mail = quoteMail(quote, customer.email, await shopName(db), await quotePdf(deps, quote), link);
       const outcome = await sendLogged(db, deps.mailer, mail, { kind: 'quote_sent', customerId: quote.customerId, entity: 'quote', entityId: id });
       if (!outcome.sent) throw new ApiError(502, 'mail_failed', `The quote could not be e-mailed (${outcome.error}); it stays ${quote.status}.`);
-      const now = nowIso();
       await db('quotes').where({ id }).update({ status: 'sent', sent_at: now, updated_at: now });
       await audit(db, req.identity, 'send', 'quote', id, { to: customer.email });
       return findQuote(db, id);
