@@ -2,7 +2,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import autocannon from 'autocannon';
-import Database from 'better-sqlite3';
+import { openDatabase } from '../../services/records/src/db/knex.js';
 import { RACK_PLAN_EXAMPLE } from '../../shared/api/rack-plan.js';
 import { loadConfig } from '../../services/common/src/config.js';
 import { DEMO_PASSWORD } from '../../services/records/src/seed/demo-data.js';
@@ -136,7 +136,7 @@ async function recordsLoad(s: Session, racks: BenchRack[], seconds: number, dbFi
   const problems: string[] = [];
   let errors = 0;
   let non2xx = 0;
-  const maxBefore = batchHighWater(dbFile);
+  const maxBefore = await batchHighWater(dbFile);
   const deadline = performance.now() + seconds * 1000;
   await Promise.all(
     racks.map(async (rack, k) => {
@@ -169,7 +169,7 @@ async function recordsLoad(s: Session, racks: BenchRack[], seconds: number, dbFi
     }),
   );
   for (const p of problems) console.log(`  records problem: ${p}`);
-  const { eventsInDatabase, lost } = countWrites(dbFile, racks, maxBefore, acknowledged);
+  const { eventsInDatabase, lost } = await countWrites(dbFile, racks, maxBefore, acknowledged);
   return {
     keepers: racks.length,
     requests: latencies.length + errors,
@@ -184,28 +184,31 @@ async function recordsLoad(s: Session, racks: BenchRack[], seconds: number, dbFi
   };
 }
 
-function batchHighWater(dbFile: string): number {
-  const db = new Database(dbFile, { readonly: true, fileMustExist: true });
+async function batchHighWater(target: string): Promise<number> {
+  const db = openDatabase(target);
   try {
-    return db.prepare('select coalesce(max(id), 0) from event_batches').pluck().get() as number;
+    const row = (await db('event_batches').max({ m: 'id' }).first()) as { m: number | string | null } | undefined;
+    return Number(row?.m ?? 0);
   } finally {
-    db.close();
+    await db.destroy();
   }
 }
 
-/** Events of this phase's feeding entries in the SQLite file, and acknowledged entries missing from it. */
-function countWrites(dbFile: string, racks: BenchRack[], maxBefore: number, acknowledged: number[]): { eventsInDatabase: number; lost: number } {
-  const db = new Database(dbFile, { readonly: true, fileMustExist: true });
+/** Events of this phase's feeding entries in the database (SQLite file or PostgreSQL), and acknowledged entries missing from it. */
+async function countWrites(target: string, racks: BenchRack[], maxBefore: number, acknowledged: number[]): Promise<{ eventsInDatabase: number; lost: number }> {
+  const db = openDatabase(target);
   try {
     const rackIds = racks.map((r) => r.id);
-    const eventsInDatabase = db
-      .prepare(`select count(*) from events e join event_batches b on b.id = e.batch_id where b.id > ? and b.rack_id in (${rackIds.map(() => '?').join(',')})`)
-      .pluck()
-      .get(maxBefore, ...rackIds) as number;
-    const stored = new Set(db.prepare('select id from event_batches where id > ?').pluck().all(maxBefore) as number[]);
-    return { eventsInDatabase, lost: acknowledged.filter((id) => !stored.has(id)).length };
+    const row = (await db('events as e')
+      .join('event_batches as b', 'b.id', 'e.batch_id')
+      .where('b.id', '>', maxBefore)
+      .whereIn('b.rack_id', rackIds)
+      .count({ n: '*' })
+      .first()) as { n: number | string };
+    const stored = new Set(((await db('event_batches').where('id', '>', maxBefore).pluck('id')) as (number | string)[]).map(Number));
+    return { eventsInDatabase: Number(row.n), lost: acknowledged.filter((id) => !stored.has(id)).length };
   } finally {
-    db.close();
+    await db.destroy();
   }
 }
 
@@ -251,11 +254,13 @@ export async function runLoadBench(log: (line: string) => void, env: NodeJS.Proc
   if (!Number.isFinite(seconds) || seconds <= 0) throw new Error(`BENCH_LOAD_SECONDS must be a positive number, got ${env['BENCH_LOAD_SECONDS']}`);
   const base = Number(env['BENCH_LOAD_PORT_BASE'] ?? 49);
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'tubwright-load-'));
+  // BENCH_DATABASE_URL runs the same load against PostgreSQL (an empty database), to set beside SQLite.
+  const databaseUrl = env['BENCH_DATABASE_URL'] || `sqlite:${path.join(dataDir, 'tubwright.sqlite')}`;
   const stackEnv = {
     ...process.env,
     DATA_DIR: dataDir,
     DATABASE_FILE: path.join(dataDir, 'tubwright.sqlite'),
-    DATABASE_URL: `sqlite:${path.join(dataDir, 'tubwright.sqlite')}`,
+    DATABASE_URL: databaseUrl,
     PORT: `${base}00`,
     CALCULATOR_PORT: `${base}01`,
     RECORDS_PORT: `${base}02`,
@@ -268,7 +273,7 @@ export async function runLoadBench(log: (line: string) => void, env: NodeJS.Proc
     LOGIN_RATE_LIMIT_PER_MINUTE: '1000',
   };
   const config = loadConfig(stackEnv);
-  await prepareDatabase(config.databaseFile, { seed: true });
+  await prepareDatabase(config.databaseUrl, { seed: true });
   const stack = await startAll(config, stackEnv, { quiet: true });
   try {
     const gateway = `http://${config.host}:${config.gatewayPort}`;
@@ -277,7 +282,7 @@ export async function runLoadBench(log: (line: string) => void, env: NodeJS.Proc
       builder: await login(gateway, 'builder@demo.tubwright.test'),
       keeper: await login(gateway, 'keeper@demo.tubwright.test'),
     };
-    log(`Stack on ports ${base}00..${base}26, ${seconds} s per phase; ${os.cpus().length} cores shared with whatever else runs, so figures are noisy.`);
+    log(`Records on ${databaseUrl.startsWith('postgres') ? 'PostgreSQL' : 'SQLite'}. Stack on ports ${base}00..${base}26, ${seconds} s per phase; ${os.cpus().length} cores shared with whatever else runs, so figures are noisy.`);
     const racks = await makeRacks(s);
 
     log(`\n-- 1. Rack plan (geometry, no nesting) through the gateway, ${CALC_CONNECTIONS} connections, ${seconds} s --`);
@@ -285,11 +290,11 @@ export async function runLoadBench(log: (line: string) => void, env: NodeJS.Proc
     log(calcLine(calculator));
 
     log(`\n-- 2. Records: ${KEEPERS} keepers entering feeding days of ${TUBS_PER_RACK} tubs, ${seconds} s --`);
-    const records = await recordsLoad(s, racks, seconds, config.databaseFile);
+    const records = await recordsLoad(s, racks, seconds, config.databaseUrl);
     log(recordsLine(records));
 
     log(`\n-- 3. Mixed: both at once while a batch cutting plan (time limit ${CUTTING_TIME_LIMIT_MS} ms) runs again and again, ${seconds} s --`);
-    const [mixedCalc, mixedRecords, cutting] = await Promise.all([calculatorLoad(s, seconds), recordsLoad(s, racks, seconds, config.databaseFile), cuttingLoop(s, seconds)]);
+    const [mixedCalc, mixedRecords, cutting] = await Promise.all([calculatorLoad(s, seconds), recordsLoad(s, racks, seconds, config.databaseUrl), cuttingLoop(s, seconds)]);
     log(`rack plan (geometry): ${calcLine(mixedCalc)}`);
     log(`records:              ${recordsLine(mixedRecords)}`);
     log(`cutting:              ${cutting.runs} plans of ${cutting.pieces} pieces, median ${cutting.medianMs} ms, non-2xx ${cutting.non2xx}, errors ${cutting.errors}`);
