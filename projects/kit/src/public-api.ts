@@ -18,4 +18,5 @@ export * from './lib/ui/data-table';
 export * from './lib/element/shell-bridge';
 export * from './lib/element/define-element';
 export * from './lib/element/module-element';
+export * from './lib/element/shell-link';
 export * from './lib/providers';
