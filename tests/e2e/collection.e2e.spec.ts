@@ -70,13 +70,13 @@ describe('the collection module, as the keeper', () => {
     await openAnimal('PR-001');
     await collection().getByRole('link', { name: /Tub R1-1A/ }).waitFor();
     await collection().getByRole('img', { name: 'Weights of PR-001 over time' }).waitFor();
-    await expect(collection().getByRole('table', { name: 'Events, newest first' }).locator('tbody tr').count()).resolves.toBeGreaterThan(2);
+    await expect.poll(() => collection().getByRole('table', { name: 'Events, newest first' }).locator('tbody tr').count()).toBeGreaterThan(2);
 
     // A photo goes up and comes back through the signed-in API (an <img src> alone could not).
     await collection().getByRole('region', { name: 'Photos' }).locator('input[type=file]').setInputFiles({ name: 'pr-001.png', mimeType: 'image/png', buffer: ONE_PIXEL_PNG });
     const photo = collection().getByRole('img', { name: /^Photo of PR-001, / });
     await photo.waitFor();
-    await expect(photo.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).resolves.toBe(1);
+    await expect.poll(() => photo.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(1);
 
     // Genes are picked from the shop's trait list (invented demo names).
     const genes = collection().getByRole('region', { name: 'Genes' });
@@ -100,21 +100,21 @@ describe('the collection module, as the keeper', () => {
     await grid.waitFor();
     const first = grid.getByRole('gridcell', { name: /^R1-1A, PR-001/ });
     await first.click();
-    await expect(first.evaluate((el) => el === document.activeElement)).resolves.toBe(true);
+    await expect.poll(() => first.evaluate((el) => el === document.activeElement)).toBe(true);
 
     // A on R1-1A moves on to R1-1B; R refuses it; O on R1-1C, then U takes that back.
     await page.keyboard.press('a');
     await page.keyboard.press('r');
     await page.keyboard.press('o');
-    await expect(grid.getByRole('gridcell', { name: /^R1-1C, .*Offered$/ }).count()).resolves.toBe(1);
+    await expect.poll(() => grid.getByRole('gridcell', { name: /^R1-1C, .*Offered$/ }).count()).toBe(1);
     await page.keyboard.press('u');
-    await expect(grid.getByRole('gridcell', { name: /^R1-1A, PR-001, .*Accepted$/ }).count()).resolves.toBe(1);
-    await expect(grid.getByRole('gridcell', { name: /^R1-1B, PR-002, .*Refused$/ }).count()).resolves.toBe(1);
-    await expect(grid.getByRole('gridcell', { name: /^R1-1C, .*not marked$/ }).count()).resolves.toBe(1);
+    await expect.poll(() => grid.getByRole('gridcell', { name: /^R1-1A, PR-001, .*Accepted$/ }).count()).toBe(1);
+    await expect.poll(() => grid.getByRole('gridcell', { name: /^R1-1B, PR-002, .*Refused$/ }).count()).toBe(1);
+    await expect.poll(() => grid.getByRole('gridcell', { name: /^R1-1C, .*not marked$/ }).count()).toBe(1);
     // Arrows move the cursor without marking.
     await page.keyboard.press('ArrowDown');
-    await expect(grid.getByRole('gridcell', { name: /^R1-2C, / }).evaluate((el) => el === document.activeElement)).resolves.toBe(true);
-    await expect(collection().getByText(/1 accepted · 1 refused · 0 offered/).isVisible()).resolves.toBe(true);
+    await expect.poll(() => grid.getByRole('gridcell', { name: /^R1-2C, / }).evaluate((el) => el === document.activeElement)).toBe(true);
+    await collection().getByText(/1 accepted · 1 refused · 0 offered/).waitFor();
     await shot('feeding-marked');
 
     await collection().getByRole('button', { name: 'Save 2 results' }).click();
@@ -134,7 +134,7 @@ describe('the collection module, as the keeper', () => {
     await collection().getByText(/^Undone: feeding of .*Refused · rat/).waitFor();
     await collection().getByRole('heading', { name: 'History' }).scrollIntoViewIfNeeded();
     await expect.poll(() => feedingDayRows().count()).toBe(before - 1);
-    await expect(feedingDayRows().filter({ hasText: 'Refused · rat' }).count()).resolves.toBe(0);
+    await expect.poll(() => feedingDayRows().filter({ hasText: 'Refused · rat' }).count()).toBe(0);
     await shot('history-undone');
   });
 
@@ -155,7 +155,7 @@ describe('the collection module, as the keeper', () => {
 
     await collection().getByRole('link', { name: 'Tub labels' }).click();
     await collection().getByRole('img', { name: /^QR code for .*\/collection\/animals\/\d+$/ }).first().waitFor();
-    await expect(collection().locator('.tw-label').filter({ hasText: 'R1-3B' }).filter({ hasText: 'PR-001' }).count()).resolves.toBe(1);
+    await expect.poll(() => collection().locator('.tw-label').filter({ hasText: 'R1-3B' }).filter({ hasText: 'PR-001' }).count()).toBe(1);
     await shot('labels');
   });
 
@@ -164,7 +164,7 @@ describe('the collection module, as the keeper', () => {
     await collection().getByRole('table', { name: 'Pairings, newest first' }).getByRole('link').first().click();
     const looks = collection().getByRole('table', { name: 'Offspring by what they look like' });
     await looks.waitFor();
-    await expect(looks.locator('tbody tr').count()).resolves.toBeGreaterThan(1);
+    await expect.poll(() => looks.locator('tbody tr').count()).toBeGreaterThan(1);
     await collection().getByRole('heading', { level: 1 }).scrollIntoViewIfNeeded();
     await shot('pairing');
     await collection().getByLabel('Fertile eggs').fill('5');

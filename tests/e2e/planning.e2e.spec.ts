@@ -39,19 +39,19 @@ describe('planning a rack', () => {
     // Common practice: opening = tub height + 1/8 in lid gap = 6 5/8 in; interior = 3 x 16 1/4
     // + 1/2 play + 2 x 1/2 support blocks = 50 1/4 in; outside adds two 1/2 in sides = 51 1/4 in.
     await expect.poll(() => dimension('levelOpening').textContent(), { timeout: 15_000 }).toBe('6 5/8 in');
-    await expect(dimension('interiorShelfLength').textContent()).resolves.toBe('50 1/4 in');
-    await expect(dimension('outerShelfLength').textContent()).resolves.toBe('51 1/4 in');
+    await expect.poll(() => dimension('interiorShelfLength').textContent()).toBe('50 1/4 in');
+    await expect.poll(() => dimension('outerShelfLength').textContent()).toBe('51 1/4 in');
     // The top panel is 1 in longer than the interior shelf: two 1/2 in side panels.
 
     const elevation = planning.locator('svg.elevation');
     await elevation.waitFor();
-    await expect(elevation.locator('rect.tub').count()).resolves.toBe(27);
+    await expect.poll(() => elevation.locator('rect.tub').count()).toBe(27);
     const diagrams = planning.locator('img.cutting-diagram');
     await expect.poll(() => diagrams.count()).toBeGreaterThan(0);
     // Diagrams load lazily: scrolled into view, the API's drawing decodes as an image.
     await diagrams.first().scrollIntoViewIfNeeded();
     await expect.poll(() => diagrams.first().evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth > 0)).toBe(true);
-    await expect(planning.getByText(/optimal|above the best possible/).first().isVisible()).resolves.toBe(true);
+    await planning.getByText(/optimal|above the best possible/).first().waitFor();
     await shot('editor');
     await planning.locator('section[aria-labelledby="p-front"]').screenshot({ path: path.join(SCREENSHOTS, 'planning-front-view.png') });
     await planning.locator('section[aria-labelledby="p-cutting"]').screenshot({ path: path.join(SCREENSHOTS, 'planning-cutting.png') });
@@ -62,7 +62,7 @@ describe('planning a rack', () => {
     await field('Levels').fill('12');
     await expect.poll(() => planning.locator('svg.elevation rect.tub').count(), { timeout: 15_000 }).toBe(36);
     await expect.poll(() => planning.locator('.summary').textContent()).not.toBe(sheetsBefore);
-    await expect(planning.locator('.summary').textContent()).resolves.toMatch(/^12 levels × 3 columns/);
+    await expect.poll(() => planning.locator('.summary').textContent()).toMatch(/^12 levels × 3 columns/);
     await field('Levels').fill('9');
     await expect.poll(() => planning.locator('svg.elevation rect.tub').count(), { timeout: 15_000 }).toBe(27);
   });
@@ -73,7 +73,7 @@ describe('planning a rack', () => {
     const before = calcCalls();
     await field('Levels').fill('0');
     await expect.poll(() => fieldError('Levels').textContent(), { timeout: 5_000 }).toContain('Levels must be from 1 to 30');
-    await expect(field('Levels').getAttribute('aria-invalid')).resolves.toBe('true');
+    await expect.poll(() => field('Levels').getAttribute('aria-invalid')).toBe('true');
     await planning.locator('p.stale').waitFor();
     await page.waitForTimeout(600);
     expect(calcCalls()).toBe(before);
@@ -88,8 +88,8 @@ describe('planning a rack', () => {
     await planning.getByRole('button', { name: 'Save plan' }).click();
     await page.waitForURL(/\/planning\/plans\/\d+$/);
     await expect.poll(() => planning.getByRole('heading', { level: 1 }).textContent()).toBe(name);
-    await expect(planning.getByText('Saved “' + name + '”.').isVisible()).resolves.toBe(true);
-    await expect(dimension('levelOpening').textContent()).resolves.toBe('6 5/8 in');
+    await planning.getByText('Saved “' + name + '”.').waitFor();
+    await expect.poll(() => dimension('levelOpening').textContent()).toBe('6 5/8 in');
 
     // The build sheet is a PDF with the cut list in it.
     const [download] = await Promise.all([page.waitForEvent('download'), planning.getByRole('button', { name: 'Build sheet' }).click()]);
@@ -106,8 +106,8 @@ describe('planning a rack', () => {
     const row = planning.getByRole('row', { name: new RegExp(name) });
     // The search narrows the list to the new plan (a header row and one plan).
     await expect.poll(() => planning.getByRole('row').count()).toBe(2);
-    await expect(row.textContent()).resolves.toContain('9 × 3 tubs');
-    await expect(row.textContent()).resolves.toContain('51 1/4 in wide × 71 5/8 in tall');
+    await expect.poll(() => row.textContent()).toContain('9 × 3 tubs');
+    await expect.poll(() => row.textContent()).toContain('51 1/4 in wide × 71 5/8 in tall');
     await shot('saved-list');
 
     await row.getByRole('link', { name }).click();

@@ -100,14 +100,14 @@ describe('the rack sizer on a shop website', () => {
       unit: 'in', tub: { length: 23, width: 16.25, height: 6.5 }, layout: { levels: 9, columns: 3 }, cutting: { include: false },
     });
     expect(`${plan.body.display.dimensions['overallWidth']} in`).toBe('51 1/4 in');
-    await expect(inches.getByText('Height with casters').isVisible()).resolves.toBe(true);
-    await expect(inches.getByText(/sheets? of rigid PVC/).isVisible()).resolves.toBe(true);
-    await expect(inches.getByText(/^Estimate/).isVisible()).resolves.toBe(true);
-    await expect(inches.getByRole('img', { name: /Front view to scale: 9 levels of 3 tubs/ }).isVisible()).resolves.toBe(true);
+    await inches.getByText('Height with casters').waitFor();
+    await inches.getByText(/sheets? of rigid PVC/).waitFor();
+    await inches.getByText(/^Estimate/).waitFor();
+    await inches.getByRole('img', { name: /Front view to scale: 9 levels of 3 tubs/ }).waitFor();
 
     // The other widget was not touched, and it has no prices (no show-prices attribute).
-    await expect(metric.getByLabel('Tub length').inputValue()).resolves.toBe('');
-    await expect(metric.getByTestId('outside-width').count()).resolves.toBe(0);
+    await expect.poll(() => metric.getByLabel('Tub length').inputValue()).toBe('');
+    await expect.poll(() => metric.getByTestId('outside-width').count()).toBe(0);
 
     // Host CSS applies to the host page (30px serif, buttons hidden) but not inside the widget.
     expect((await fontOf(page.locator('#host-banner'))).size).toBe('30px');
@@ -125,15 +125,15 @@ describe('the rack sizer on a shop website', () => {
     // The second widget works on its own, in millimetres: 51 1/4 in = 1301.75 mm (25.4 mm per inch, exact).
     await fill(metric, { 'Tub length': '584.2', 'Tub width': '412.75', 'Tub height': '165.1', Levels: '9', Columns: '3' });
     await expect.poll(() => metric.getByTestId('outside-width').textContent(), { timeout: 15_000 }).toBe('1301.8 mm');
-    await expect(metric.getByText(/^Estimate/).count()).resolves.toBe(0);
-    await expect(inches.getByTestId('outside-width').textContent()).resolves.toBe('51 1/4 in');
+    await expect.poll(() => metric.getByText(/^Estimate/).count()).toBe(0);
+    await expect.poll(() => inches.getByTestId('outside-width').textContent()).toBe('51 1/4 in');
   });
 
   it('turns a quote request into a lead with a draft quote and two e-mails', async () => {
     const inches = page.locator('#sizer-in');
     const email = `widget-visitor-${Date.now()}@example.test`;
     await inches.getByRole('button', { name: 'Request a quote' }).click();
-    await expect(inches.getByLabel('Name', { exact: true }).evaluate((el) => el === (el.getRootNode() as ShadowRoot).activeElement)).resolves.toBe(true);
+    await expect.poll(() => inches.getByLabel('Name', { exact: true }).evaluate((el) => el === (el.getRootNode() as ShadowRoot).activeElement)).toBe(true);
     await inches.getByLabel('Name', { exact: true }).fill('Morgan Ashdown');
     await inches.getByLabel('E-mail', { exact: true }).fill(email);
     await inches.getByLabel(/^Note/).fill('Three ball python yearlings.');
@@ -149,7 +149,7 @@ describe('the rack sizer on a shop website', () => {
     await done.waitFor({ timeout: 15_000 });
     const reference = (await done.locator('strong').first().textContent())!.trim();
     expect(reference).toMatch(/^Q-\d{4}-\d{4,}$/);
-    await expect(done.getByText(/Estimate with tax: \$/).isVisible()).resolves.toBe(true);
+    await done.getByText(/Estimate with tax: \$/).waitFor();
     await page.screenshot({ path: path.join(SCREENSHOTS, 'widget-quote-sent.png'), fullPage: true });
 
     // The owner finds the lead and its draft quote for this very rack.
@@ -175,7 +175,7 @@ describe('the rack sizer on a shop website', () => {
     await signIn(page, baseUrl, 'owner@demo.tubwright.test');
     await page.goto(`${baseUrl}/orders/quotes?q=${encodeURIComponent(reference)}`);
     await page.locator('tw-orders').getByText(reference).first().waitFor({ timeout: 30_000 });
-    await expect(page.locator('tw-orders').getByText('Morgan Ashdown').first().isVisible()).resolves.toBe(true);
+    await page.locator('tw-orders').getByText('Morgan Ashdown').first().waitFor();
     await page.screenshot({ path: path.join(SCREENSHOTS, 'widget-lead-in-orders.png'), fullPage: true });
   });
 
@@ -185,8 +185,8 @@ describe('the rack sizer on a shop website', () => {
     await inches.getByLabel('Tub length').waitFor();
     await fill(inches, TUB_IN);
     await inches.getByRole('alert').filter({ hasText: 'cannot reach the shop' }).waitFor({ timeout: 15_000 });
-    await expect(inches.getByTestId('outside-width').count()).resolves.toBe(0);
-    await expect(inches.getByRole('button', { name: 'Request a quote' }).count()).resolves.toBe(0);
+    await expect.poll(() => inches.getByTestId('outside-width').count()).toBe(0);
+    await expect.poll(() => inches.getByRole('button', { name: 'Request a quote' }).count()).toBe(0);
     await page.screenshot({ path: path.join(SCREENSHOTS, 'widget-refused-origin.png'), fullPage: true });
 
     // What the browser was told: the preflight is refused, and a direct call with that origin is 403.
@@ -215,7 +215,7 @@ describe('API keys in the console', () => {
     await page.getByRole('button', { name: 'New key' }).click();
     await page.getByLabel('Name', { exact: true }).fill('Console e2e website');
     await page.getByLabel('Website origins').fill('https://racks.example/sizer');
-    await expect(page.getByRole('checkbox', { name: /Order status/ }).isDisabled()).resolves.toBe(true);
+    await expect.poll(() => page.getByRole('checkbox', { name: /Order status/ }).isDisabled()).toBe(true);
     await page.screenshot({ path: path.join(SCREENSHOTS, 'api-keys-form.png'), fullPage: true });
     await page.getByRole('button', { name: 'Create key' }).click();
 
@@ -226,11 +226,11 @@ describe('API keys in the console', () => {
     );
     await page.screenshot({ path: path.join(SCREENSHOTS, 'api-keys-created.png'), fullPage: true });
     await page.getByRole('button', { name: 'I have copied it' }).click();
-    await expect(page.getByTestId('new-key').count()).resolves.toBe(0);
+    await expect.poll(() => page.getByTestId('new-key').count()).toBe(0);
 
     const row = page.getByRole('row').filter({ hasText: 'Console e2e website' });
     await row.waitFor();
-    await expect(row.textContent()).resolves.toContain('https://racks.example');
+    await expect.poll(() => row.textContent()).toContain('https://racks.example');
     await expect(row.textContent()).resolves.not.toContain(key);
     const listed = await api<{ items: Array<{ id: number; name: string; origins: string[]; revokedAt: string | null }> }>('GET', '/api-keys?q=Console%20e2e');
     expect(listed.body.items).toEqual([expect.objectContaining({ origins: ['https://racks.example'], revokedAt: null })]);
