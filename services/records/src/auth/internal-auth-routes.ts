@@ -16,7 +16,7 @@ import { nowIso } from '../db/knex.js';
 import { shopName } from '../orders/mail-notices.js';
 import { hashPassword, verifyPassword } from '../users/passwords.js';
 import { usersStore, type UserRow } from '../users/users-store.js';
-import { afterFailure, isLocked, LOCKOUT_MINUTES } from './lockout.js';
+import { afterFailure, isLocked } from './lockout.js';
 import { passwordResetStore, RESET_TTL_MINUTES } from './password-reset-store.js';
 import { resetMail } from './reset-mail.js';
 import { sessionStore } from './session-store.js';
@@ -134,4 +134,3 @@ export function internalAuthRoutes(deps: RecordsDeps): Router {
   return router;
 }
 
-export { LOCKOUT_MINUTES };
