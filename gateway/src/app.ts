@@ -8,6 +8,7 @@ import { EndedSessions } from './auth/ended-sessions.js';
 import { bearerAuth } from './auth/passport-jwt.js';
 import { TokenService } from './auth/tokens.js';
 import { openApiDocument } from './openapi/document.js';
+import { CalculationMemo } from './proxy/calculation-memo.js';
 import { CalculatorPool } from './proxy/calculator-pool.js';
 import { calculatorProxy } from './proxy/calculator-proxy.js';
 import { ServiceClient } from './proxy/service-client.js';
@@ -38,6 +39,8 @@ export interface GatewayDeps {
   apiKeyRateLimitPerMinute?: number;
   widgetIpRateLimitPerMinute?: number;
   version?: string;
+  /** Recent calculator answers reused for an identical request (see CalculationMemo); 0 or absent keeps none. */
+  calculationMemoEntries?: number;
 }
 
 /** The one door: sign-in, identity, routing to the services, the API document and the console. */
@@ -54,6 +57,8 @@ export function createGatewayApp(deps: GatewayDeps): express.Express {
     healthIntervalMs: deps.calculatorHealthIntervalMs ?? 0,
   });
   app.locals.calculatorPool = calculatorPool;
+  const calculationMemo = deps.calculationMemoEntries ? new CalculationMemo(deps.calculationMemoEntries) : undefined;
+  app.locals.calculationMemo = calculationMemo;
   const services = {
     calculator: calculatorPool,
     records: new ServiceClient(deps.recordsUrl, deps.internalSecret, 'records'),
@@ -106,7 +111,7 @@ export function createGatewayApp(deps: GatewayDeps): express.Express {
   app.use('/api/v1', apiKeyAuth(services.records, keyChecks), ...apiKeyRateLimits(deps.apiKeyRateLimitPerMinute ?? 300, deps.widgetIpRateLimitPerMinute ?? 60));
   app.use('/api/v1', (req, res, next) => (req.identity ? next() : bearer(req, res, next)));
 
-  app.use(calculatorProxy(calculatorPool, deps.internalSecret, { prefixes: ['/api/v1/calc/', '/api/v1/genetics/'], timeoutMs: deps.upstreamTimeoutMs }));
+  app.use(calculatorProxy(calculatorPool, deps.internalSecret, { prefixes: ['/api/v1/calc/', '/api/v1/genetics/'], timeoutMs: deps.upstreamTimeoutMs, memo: calculationMemo }));
   app.use(serviceProxy({ name: 'mail', url: deps.mailUrl, paths: ['/api/v1/mail/**'] }, deps.internalSecret, deps.upstreamTimeoutMs));
   app.use(serviceProxy({ name: 'records', url: deps.recordsUrl, paths: ['/api/v1/**'] }, deps.internalSecret, deps.upstreamTimeoutMs));
 

@@ -21,6 +21,7 @@ await listen(
     publicUrl: config.publicUrl,
     apiKeyRateLimitPerMinute: config.apiKeyRateLimitPerMinute,
     widgetIpRateLimitPerMinute: config.widgetIpRateLimitPerMinute,
+    calculationMemoEntries: config.calculationMemoEntries,
   }),
   config.host,
   config.gatewayPort,

@@ -32,6 +32,8 @@ async function runWith(copies: number, portBase: number): Promise<CopiesFigures[
   const env = {
     ...process.env, DATA_DIR: dataDir, PORT: p(0), CALCULATOR_PORT: p(1), RECORDS_PORT: p(2), SMTP_PORT: p(25), MAIL_HTTP_PORT: p(26), PAYMENTS_PORT: p(10),
     JWT_SECRET: 'bench-jwt', INTERNAL_SECRET: 'bench-internal', LOGIN_RATE_LIMIT_PER_MINUTE: '1000', CALCULATOR_COPIES: String(copies), CALCULATOR_URLS: '',
+    // The same spec every time: reused answers would hide how much the copies compute.
+    CALCULATION_MEMO_ENTRIES: '0',
   };
   const config = loadConfig(env);
   await prepareDatabase(config.databaseUrl, { seed: true });

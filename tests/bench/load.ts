@@ -271,6 +271,8 @@ export async function runLoadBench(log: (line: string) => void, env: NodeJS.Proc
     INTERNAL_SECRET: 'load-bench-internal',
     ACCESS_TOKEN_TTL_S: '7200',
     LOGIN_RATE_LIMIT_PER_MINUTE: '1000',
+    // One spec posted over and over: without this the gateway would reuse one answer and the calculator would sit idle.
+    CALCULATION_MEMO_ENTRIES: '0',
   };
   const config = loadConfig(stackEnv);
   await prepareDatabase(config.databaseUrl, { seed: true });

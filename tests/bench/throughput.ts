@@ -1,6 +1,7 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import autocannon from 'autocannon';
 import { ROOT } from '../../scripts/lib/processes.js';
+import { median } from './stats.js';
 
 export interface Throughput {
   name: string;
@@ -26,6 +27,37 @@ export async function measure(name: string, url: string, body: unknown, headers:
     p99Ms: result.latency.p99,
     errors: result.errors,
     non2xx: result.non2xx,
+  };
+}
+
+/** As measure, but every request carries a body of its own (so no answer can be reused). */
+export async function measureDistinct(name: string, url: string, bodyFor: (n: number) => unknown, headers: Record<string, string> = {}, seconds = 8): Promise<Throughput> {
+  let n = 0;
+  const result = await autocannon({
+    url,
+    method: 'POST',
+    connections: 16,
+    duration: seconds,
+    headers: { 'content-type': 'application/json', ...headers },
+    requests: [{ setupRequest: (req) => ({ ...req, body: JSON.stringify(bodyFor(n++)) }) }],
+  });
+  return {
+    name,
+    requestsPerSecond: Math.round(result.requests.average),
+    p99Ms: result.latency.p99,
+    errors: result.errors,
+    non2xx: result.non2xx,
+  };
+}
+
+/** The median of several runs of one measurement: requests per second and p99 each taken as their median. */
+export function medianRun(runs: Throughput[]): Throughput {
+  return {
+    name: runs[0]!.name,
+    requestsPerSecond: Math.round(median(runs.map((r) => r.requestsPerSecond))),
+    p99Ms: median(runs.map((r) => r.p99Ms)),
+    errors: runs.reduce((sum, r) => sum + r.errors, 0),
+    non2xx: runs.reduce((sum, r) => sum + r.non2xx, 0),
   };
 }
 

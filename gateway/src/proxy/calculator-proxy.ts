@@ -2,6 +2,7 @@ import http from 'node:http';
 import https from 'node:https';
 import type { RequestHandler } from 'express';
 import { IDENTITY_HEADER, signIdentity, type Identity } from '../../../services/common/src/internal-identity.js';
+import type { CalculationMemo } from './calculation-memo.js';
 import type { CalculatorCopy, CalculatorPool } from './calculator-pool.js';
 
 export interface CalculatorProxyOptions {
@@ -11,7 +12,12 @@ export interface CalculatorProxyOptions {
   maxBodyBytes?: number;
   /** A calculation that has not answered by then gets 504, as the other services do (default 30 s; cutting plans take a few). */
   timeoutMs?: number;
+  /** Recent answers reused for an identical request; none when absent. */
+  memo?: CalculationMemo;
 }
+
+/** Tells the caller whether its answer was computed for it or reused from an identical request. */
+export const CALCULATION_HEADER = 'x-tw-calculation';
 
 // Hop-by-hop headers belong to one connection, not to the request (RFC 9110, section 7.6.1).
 const HOP_BY_HOP = new Set(['connection', 'keep-alive', 'proxy-connection', 'proxy-authenticate', 'proxy-authorization', 'te', 'trailer', 'transfer-encoding', 'upgrade']);
@@ -75,6 +81,14 @@ export function calculatorProxy(pool: CalculatorPool, internalSecret: string, op
     void readBody(req, maxBodyBytes).then(
       (body) => {
         if (body === 'too_large') return sendError(res, 413, 'too_large', `The request body is over ${maxBodyBytes} bytes.`);
+        const memo = options.memo;
+        const memoKey = memo?.keyFor(req.method ?? 'POST', url, req.identity, body);
+        const remembered = memoKey ? memo!.recall(memoKey) : undefined;
+        if (remembered) {
+          res.writeHead(200, { ...remembered.headers, 'content-length': remembered.body.length, [CALCULATION_HEADER]: 'reused' });
+          res.end(remembered.body);
+          return;
+        }
         const headers = forwardedHeaders(req, body, internalSecret);
         const attempt = (copy: CalculatorCopy | undefined, retried: boolean): void => {
           if (!copy) {
@@ -99,7 +113,13 @@ export function calculatorProxy(pool: CalculatorPool, internalSecret: string, op
             copy.served++;
             const outHeaders: http.OutgoingHttpHeaders = {};
             for (const [name, value] of Object.entries(answer.headers)) if (!HOP_BY_HOP.has(name)) outHeaders[name] = value;
+            if (memoKey) outHeaders[CALCULATION_HEADER] = 'computed';
             res.writeHead(answer.statusCode ?? 502, outHeaders);
+            if (memoKey && answer.statusCode === 200) {
+              const chunks: Buffer[] = [];
+              answer.on('data', (chunk: Buffer) => chunks.push(chunk));
+              answer.on('end', () => memo!.remember(memoKey, answer.headers, Buffer.concat(chunks)));
+            }
             answer.pipe(res);
             answer.on('error', () => res.destroy());
           });

@@ -40,6 +40,8 @@ export interface Config {
   calculatorPorts: number[];
   /** Where the gateway (and the records service, the first) reaches the calculator copies. */
   calculatorUrls: string[];
+  /** How many recent calculator answers the gateway keeps to answer an identical request again; 0 keeps none. */
+  calculationMemoEntries: number;
 }
 
 /** Extra calculator copies listen from CALCULATOR_PORT + 30 upwards (4331, 4332, …), clear of the other defaults. */
@@ -62,6 +64,14 @@ function positiveInt(env: Env, name: string, fallback: number): number {
   if (raw === undefined || raw === '') return fallback;
   const value = Number(raw);
   if (!Number.isInteger(value) || value <= 0) throw new Error(`${name} must be a positive whole number, got "${raw}"`);
+  return value;
+}
+
+function wholeNumber(env: Env, name: string, fallback: number): number {
+  const raw = env[name];
+  if (raw === undefined || raw === '') return fallback;
+  const value = Number(raw);
+  if (!Number.isInteger(value) || value < 0) throw new Error(`${name} must be a whole number (0 or more), got "${raw}"`);
   return value;
 }
 
@@ -115,6 +125,7 @@ export function loadConfig(env: Env = process.env, root = process.cwd()): Config
     publicUrl: env.PUBLIC_URL || `http://${host}:${gatewayPort}`,
     ...databaseSettings(env, root, dataDir),
     ...calculatorSettings(env, host),
+    calculationMemoEntries: wholeNumber(env, 'CALCULATION_MEMO_ENTRIES', 1000),
   };
 }
 
