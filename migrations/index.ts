@@ -5,6 +5,8 @@ import * as collection from './20261202_003_collection.js';
 import * as orders from './20261202_004_orders.js';
 import * as apiKeys from './20261202_005_api_keys.js';
 import * as sessions from './20261202_006_sessions.js';
+import * as orderDetails from './20261202_007_order_details.js';
+import * as tubModelPhotos from './20261202_008_tub_model_photos.js';
 
 /**
  * Migrations are listed here rather than read from the folder, so tsx, vitest and compiled
@@ -17,6 +19,8 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202_004_orders': orders,
   '20261202_005_api_keys': apiKeys,
   '20261202_006_sessions': sessions,
+  '20261202_007_order_details': orderDetails,
+  '20261202_008_tub_model_photos': tubModelPhotos,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -27,7 +27,10 @@ export const CreateTraitRequest = z
   .object({ name: TraitName, mode: z.enum(INHERITANCE_MODES), notes: z.string().max(2000).default('') })
   .strict()
   .describe('A trait of the shop\'s list; names are unique (ignoring case).');
-export const UpdateTraitRequest = z.object({ notes: z.string().max(2000) }).strict().describe('Notes only: animals already carry the name and mode.');
+export const UpdateTraitRequest = z
+  .object({ name: TraitName.optional(), mode: z.enum(INHERITANCE_MODES).optional(), notes: z.string().max(2000).optional() })
+  .strict()
+  .describe('Rename a trait (animals keep it: genes point at the trait, not its name), or change its mode or notes. A mode whose states do not fit the genes animals carry is refused (409): between incomplete-dominant and dominant always fits, to or from recessive only while no animal carries the trait.');
 
 export const GENE_STATES = ['het', 'visual', 'single', 'super', 'possible-het'] as const;
 export const AnimalGene = z.object({

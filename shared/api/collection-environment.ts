@@ -54,3 +54,25 @@ export const RangeSet = z
   .describe('The ranges alerts are checked against (common practice).');
 
 export const ReadingUploadQuery = z.object({ rackId: z.coerce.number().int().positive().describe('The rack the logger sat in.') }).strict();
+
+export const SpeciesRanges = z
+  .object({
+    warmF: z.tuple([z.number(), z.number()]).describe('Warm side, °F.'),
+    coolF: z.tuple([z.number(), z.number()]).describe('Cool side, °F.'),
+    humidityPct: z.tuple([z.number(), z.number()]).describe('Relative humidity, %.'),
+  })
+  .describe('Husbandry ranges, common practice.');
+export const Species = z.object({
+  name: z.string().describe('The name animals carry in their species field, e.g. "Python regius".'),
+  commonName: z.string().nullable().describe('e.g. "ball python"; null when the shop has none on record.'),
+  animalCount: z.number().int().describe('Animals of the species in the collection now (active or on hold).'),
+  ranges: SpeciesRanges.nullable().describe('null when the shop has no ranges on record for the species.'),
+});
+export const SpeciesList = z
+  .object({
+    items: z.array(Species),
+    total: z.number().int(),
+    alertRanges: z.string().describe('Which ranges the reading alerts use.'),
+    caution: z.string(),
+  })
+  .describe('The species of the collection, by name, with the husbandry ranges on record.');

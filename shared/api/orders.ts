@@ -163,6 +163,8 @@ export const OrderSummary = z.object({
   deliveryMethod: z.enum(DELIVERY_METHODS),
   deliveryDate: IsoDate.nullable(),
   deliveryAddress: z.string(),
+  doorwayHeightIn: z.number().nullable().describe('The lowest doorway on the way to the rack\'s room, in inches (25.4 mm each), as the customer measured it; the delivery check compares the tallest section with it.'),
+  refundedCents: Cents('Sum of succeeded refunds'),
   notes: z.string(),
   createdAt: IsoDateTime,
   updatedAt: IsoDateTime,
@@ -186,10 +188,12 @@ export const OrderListQuery = listQuery(['number', 'status', 'deliveryDate', 'to
   customerId: z.coerce.number().int().positive().optional(),
 });
 
+const DoorwayHeightIn = z.number().positive('must be above 0').max(240, 'must be at most 240 in (20 ft)').nullable();
 const OrderDelivery = {
   deliveryMethod: z.enum(DELIVERY_METHODS).default('pickup'),
   deliveryDate: IsoDate.nullable().optional(),
   deliveryAddress: z.string().trim().max(500).default(''),
+  doorwayHeightIn: DoorwayHeightIn.optional(),
   notes: z.string().max(4000).default(''),
 };
 export const CreateOrderRequest = z
@@ -201,6 +205,7 @@ export const UpdateOrderRequest = z
     deliveryMethod: z.enum(DELIVERY_METHODS),
     deliveryDate: IsoDate.nullable(),
     deliveryAddress: z.string().trim().max(500),
+    doorwayHeightIn: DoorwayHeightIn,
     notes: z.string().max(4000),
   })
   .partial()
@@ -217,6 +222,8 @@ export const StageChangeRequest = z
 
 export const PAYMENT_KINDS = ['deposit', 'balance'] as const;
 export const PAYMENT_STATUSES = ['pending', 'succeeded', 'failed', 'canceled'] as const;
+/** checkout: a payment page of the provider's that the customer opens from a link; card: a card taken in the shop. */
+export const PAYMENT_VIAS = ['checkout', 'card'] as const;
 
 export const Payment = z.object({
   id: z.number().int(),
@@ -225,7 +232,10 @@ export const Payment = z.object({
   amountCents: Cents('Amount'),
   currency: z.string(),
   status: z.enum(PAYMENT_STATUSES).describe('Changed only by the provider\'s signed events (never by a browser redirect).'),
-  providerId: z.string().nullable().describe('The provider\'s payment intent id.'),
+  via: z.enum(PAYMENT_VIAS),
+  providerId: z.string().nullable().describe('The provider\'s checkout session id (via checkout) or payment intent id (via card).'),
+  checkoutUrl: z.string().nullable().describe('The provider\'s payment page for the customer (via checkout).'),
+  refundedCents: Cents('Refunded from this payment so far'),
   clientSecret: z.string().nullable().optional().describe('For the provider\'s browser SDK; only in the answer that created the payment.'),
   failureMessage: z.string().nullable(),
   paidAt: IsoDateTime.nullable(),
@@ -233,7 +243,13 @@ export const Payment = z.object({
 });
 export const PaymentList = z.object({ items: z.array(Payment) });
 export const CreatePaymentRequest = z
-  .object({ kind: z.enum(PAYMENT_KINDS).default('deposit').describe('deposit: the deposit still due; balance: everything still owed.') })
+  .object({
+    kind: z.enum(PAYMENT_KINDS).default('deposit').describe('deposit: the deposit still due; balance: everything still owed.'),
+    via: z
+      .enum(PAYMENT_VIAS)
+      .default('card')
+      .describe('checkout: the answer carries `checkoutUrl`, the provider\'s page where the customer pays; card: confirm with `POST /api/v1/payments/{id}/confirm`.'),
+  })
   .strict();
 export const ConfirmPaymentRequest = z
   .object({
@@ -242,6 +258,32 @@ export const ConfirmPaymentRequest = z
       .regex(/^pm_[A-Za-z0-9_]+$/, 'must be a payment method id like pm_card_visa')
       .default('pm_card_visa')
       .describe('Test method for the demo: pm_card_visa succeeds, pm_card_chargeDeclined is declined.'),
+  })
+  .strict();
+export const REFUND_STATUSES = ['pending', 'succeeded', 'failed'] as const;
+export const Refund = z.object({
+  id: z.number().int(),
+  orderId: z.number().int(),
+  paymentId: z.number().int(),
+  amountCents: Cents('Amount returned to the customer'),
+  currency: z.string(),
+  status: z.enum(REFUND_STATUSES).describe('Set by the provider\'s signed events.'),
+  providerId: z.string().nullable(),
+  reason: z.string(),
+  refundedAt: IsoDateTime.nullable(),
+  createdBy: z.string(),
+  createdAt: IsoDateTime,
+});
+export const RefundList = z.object({ items: z.array(Refund) });
+export const CreateRefundRequest = z
+  .object({
+    amountCents: z
+      .number()
+      .int('must be whole cents')
+      .positive('must be above 0')
+      .optional()
+      .describe('How much to return; everything paid and not yet refunded when absent.'),
+    reason: z.string().trim().min(1, 'is required').max(500),
   })
   .strict();
 export const WebhookAck = z.object({ received: z.literal(true), duplicate: z.boolean().describe('True when this event had already been applied.') });
@@ -278,7 +320,7 @@ export const InvoiceListQuery = listQuery(['number', 'issuedOn', 'dueOn', 'total
 // ---------------------------------------------------------------------------------------------
 // Mail log
 
-export const MAIL_KINDS = ['quote_sent', 'order_accepted', 'deposit_received', 'order_ready', 'order_delivered', 'invoice_issued', 'quote_request_received', 'quote_request_confirmation'] as const;
+export const MAIL_KINDS = ['quote_sent', 'order_accepted', 'deposit_received', 'order_ready', 'order_delivered', 'refund_issued', 'invoice_issued', 'quote_request_received', 'quote_request_confirmation'] as const;
 export const MailLogEntry = z.object({
   id: z.number().int(),
   to: z.string(),

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { listQuery, page } from './common.js';
+import { IsoDateTime, listQuery, page } from './common.js';
 
 const inches = (what: string) =>
   z.number().positive(`${what} must be greater than zero`).max(120).describe(`${what}, inches (outside size)`);
@@ -13,6 +13,7 @@ export const TubModel = z.object({
   heightIn: z.number().describe('Including the rim, inches'),
   volumeQt: z.number().nullable().describe('Nominal volume, US quarts'),
   notes: z.string(),
+  photoId: z.number().int().nullable().describe('The current photo (GET /api/v1/tub-model-photos/{id}/thumbnail or /file), or null. Set by uploading, not by PATCH.'),
 });
 
 export const TubModelListQuery = listQuery(['name', 'maker', 'lengthIn', 'widthIn', 'heightIn']);
@@ -30,3 +31,19 @@ export const CreateTubModelRequest = z
   })
   .strict();
 export const UpdateTubModelRequest = CreateTubModelRequest.partial().strict();
+
+// ---------------------------------------------------------------------------------------------
+// Photo: one optional photo per tub model (multipart upload; the bytes are checked, not the name).
+
+export const TubModelPhoto = z
+  .object({
+    id: z.number().int(),
+    tubModelId: z.number().int(),
+    contentType: z.string().describe('image/jpeg, image/png, image/gif or image/webp, read from the bytes.'),
+    sizeBytes: z.number().int(),
+    hasThumbnail: z.boolean().describe('False when no thumbnail was sent: the thumbnail route then serves the original.'),
+    url: z.string().describe('The image: GET with the same sign-in.'),
+    thumbnailUrl: z.string().describe('A small copy for lists.'),
+    createdAt: IsoDateTime,
+  })
+  .describe('The current photo of a tub model.');

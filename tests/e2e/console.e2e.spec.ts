@@ -100,6 +100,19 @@ describe('the console', () => {
     await page.getByRole('button', { name: 'Accept this quote' }).click();
     await page.getByRole('status').getByText(/Your order is O-\d{4}-\d{4}/).waitFor();
     expect(refused).toEqual([]);
+
+    // The deposit, on the payment stand-in's own page; only its signed event marks the order paid.
+    const orderNumber = (await page.getByRole('status').getByText(/Your order is/).textContent())!.match(/O-\d{4}-\d{4}/)![0];
+    await page.getByRole('button', { name: 'Pay the deposit' }).click();
+    await page.getByRole('heading', { name: `Deposit for order ${orderNumber}` }).waitFor();
+    expect(new URL(page.url()).pathname).toMatch(/^\/checkout\/cs_test_/);
+    await page.screenshot({ path: path.join(SCREENSHOTS, 'checkout-page.png') });
+    await page.getByRole('button', { name: /^Pay / }).click();
+    await page.getByRole('status').getByText('Deposit received, thank you').waitFor();
+    expect(page.url()).toContain('payment=received');
+    const orders = (await (await fetch(`${baseUrl}/api/v1/orders?limit=100&sort=-createdAt`, { headers: auth })).json()) as { items: { number: string; status: string }[] };
+    expect(orders.items.find((o) => o.number === orderNumber)?.status).toBe('deposit_paid');
+    await linkFromCatcher(new RegExp(`deposit received for ${orderNumber}`), /order/);
   });
 
   it('lets someone who forgot a password choose a new one from the e-mailed link', async () => {

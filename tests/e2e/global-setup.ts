@@ -29,6 +29,8 @@ export async function setup(project: TestProject): Promise<void> {
     PAYMENTS_PORT: `${base}10`,
     JWT_SECRET: 'e2e-jwt-secret',
     INTERNAL_SECRET: 'e2e-internal-secret',
+    // Every browser test signs in, several as the owner within one minute; the limit itself is tested in gateway/src.
+    LOGIN_RATE_LIMIT_PER_MINUTE: '1000',
   };
   const config = loadConfig(env);
   await prepareDatabase(config.databaseFile, { seed: true });

@@ -36,7 +36,7 @@ describe('the orders module', () => {
   it('lets sales find a customer and quote a saved plan, totals with tax', async () => {
     await signIn(page, baseUrl, 'sales@demo.tubwright.test');
     await page.goto(`${baseUrl}/orders`);
-    await orders.getByLabel('Filter by name, e-mail or place').fill('greta');
+    await orders.getByLabel('Filter by name, e-mail, place or address').fill('greta');
     await orders.getByRole('link', { name: 'Greta Lindqvist' }).click();
     await orders.getByRole('heading', { name: 'Greta Lindqvist' }).waitFor();
     await orders.getByText('No quotes yet.').waitFor();
@@ -125,7 +125,8 @@ describe('the orders module', () => {
     const toCut = orders.getByRole('region', { name: /^To cut/ });
     await toCut.getByRole('checkbox').first().waitFor();
     const boxes = toCut.getByRole('checkbox');
-    await expect.poll(() => boxes.count()).toBe(2);
+    // Other browser tests share the demo shop and may have an order of their own waiting to be cut.
+    await expect.poll(() => boxes.count()).toBeGreaterThanOrEqual(2);
     await boxes.nth(0).check();
     await boxes.nth(1).check();
     await shot('production-board');

@@ -5,7 +5,7 @@ import {
   TraitPage, UpdateClutchRequest, UpdatePairingRequest, UpdateTraitRequest,
 } from '../../../shared/api/collection-breeding.js';
 import {
-  CALIBRATION_CAUTION, CREATE_READING_EXAMPLE, CreateReadingRequest, EnvironmentListQuery, EnvironmentReading, EnvironmentReadingPage, RangeSet, ReadingUploadQuery, ReadingUploadResult,
+  CALIBRATION_CAUTION, CREATE_READING_EXAMPLE, CreateReadingRequest, EnvironmentListQuery, EnvironmentReading, EnvironmentReadingPage, RangeSet, ReadingUploadQuery, ReadingUploadResult, SpeciesList,
 } from '../../../shared/api/collection-environment.js';
 import {
   BULK_FEEDING_EXAMPLE, BulkFeedingRequest, CREATE_EVENT_EXAMPLE, CreateEventRequest, EventBatch, EventExportQuery, EventListQuery, EventPage, HusbandryEvent, WeightSeries,
@@ -71,7 +71,11 @@ documentRoutes(
   { method: 'get', path: '/api/v1/traits', tag: 'genetics', summary: 'The shop\'s trait list', roles: KEEPERS_AND_SALES, query: TraitListQuery, success: { status: 200, schema: TraitPage, description: 'One page' } },
   { method: 'get', path: '/api/v1/traits/:id', tag: 'genetics', summary: 'Read one trait', roles: KEEPERS_AND_SALES, params: IdParams, success: { status: 200, schema: Trait, description: 'The trait' }, errors: [404] },
   { method: 'post', path: '/api/v1/traits', tag: 'genetics', summary: 'Add a trait', roles: KEEPERS, body: CreateTraitRequest, bodyExample: { name: 'lattice', mode: 'recessive', notes: '' }, success: { status: 201, schema: Trait, description: 'Created' }, errors: [409] },
-  { method: 'patch', path: '/api/v1/traits/:id', tag: 'genetics', summary: 'Change a trait\'s notes', roles: KEEPERS, params: IdParams, body: UpdateTraitRequest, success: { status: 200, schema: Trait, description: 'Changed' }, errors: [404] },
+  {
+    method: 'patch', path: '/api/v1/traits/:id', tag: 'genetics', summary: 'Rename a trait, or change its mode or notes', roles: KEEPERS, params: IdParams, body: UpdateTraitRequest, bodyExample: { name: 'lattice', mode: 'recessive' },
+    success: { status: 200, schema: Trait, description: 'Changed' }, errors: [404, 409],
+    description: '409 (field `name`) for a name another trait has, ignoring case; 409 (field `mode`) for a change to or from recessive while animals carry the trait (their het and visual genes would not fit single and super).',
+  },
   { method: 'delete', path: '/api/v1/traits/:id', tag: 'genetics', summary: 'Remove a trait no animal carries', roles: KEEPERS, params: IdParams, success: NO_CONTENT, errors: [404, 409] },
   { method: 'get', path: '/api/v1/animals/:id/genes', tag: 'genetics', summary: 'An animal\'s genes', roles: KEEPERS, params: IdParams, success: { status: 200, schema: AnimalGenes, description: 'Genes' }, errors: [404] },
   {
@@ -109,6 +113,10 @@ documentRoutes(
 
   // Environment
   { method: 'get', path: '/api/v1/environment/ranges', tag: 'environment', summary: 'The ranges readings are checked against', roles: KEEPERS, success: { status: 200, schema: RangeSet, description: 'Ranges' }, description: `Common practice: warm side 88 to 92 °F, cool side 76 to 80 °F, humidity 50 to 60 %. ${CALIBRATION_CAUTION}` },
+  {
+    method: 'get', path: '/api/v1/environment/species', tag: 'environment', summary: 'The species of the collection with their husbandry ranges', roles: KEEPERS, success: { status: 200, schema: SpeciesList, description: 'Species, by name' },
+    description: `Every species animals in the collection carry (active or on hold), and the ball python always. Ranges are common practice and given only where the shop has them on record (ball python: warm side 88 to 92 °F, cool side 76 to 80 °F, humidity 50 to 60 %); null otherwise. ${CALIBRATION_CAUTION}`,
+  },
   { method: 'get', path: '/api/v1/environment-readings', tag: 'environment', summary: 'Temperature and humidity readings, with alerts', roles: KEEPERS, query: EnvironmentListQuery, success: { status: 200, schema: EnvironmentReadingPage, description: 'One page' } },
   { method: 'post', path: '/api/v1/environment-readings', tag: 'environment', summary: 'Enter a reading', roles: KEEPERS, body: CreateReadingRequest, bodyExample: CREATE_READING_EXAMPLE, success: { status: 201, schema: EnvironmentReading, description: 'Recorded' }, errors: [422] },
   {

@@ -6,7 +6,7 @@ import { IdParams } from '../../../shared/api/common.js';
 import { CreateCustomerRequest, Customer, CustomerListQuery, CustomerPage, UpdateCustomerRequest } from '../../../shared/api/customers.js';
 import { HealthResponse } from '../../../shared/api/health.js';
 import { MailListQuery, MailMessage, MailPage } from '../../../shared/api/mail.js';
-import { CreateTubModelRequest, TubModel, TubModelListQuery, TubModelPage, UpdateTubModelRequest } from '../../../shared/api/tub-models.js';
+import { CreateTubModelRequest, TubModel, TubModelListQuery, TubModelPage, TubModelPhoto, UpdateTubModelRequest } from '../../../shared/api/tub-models.js';
 import { CreateUserRequest, UpdateUserRequest, User, UserListQuery, UserPage } from '../../../shared/api/users.js';
 import { documentRoutes, type RouteDoc } from './route-catalog.js';
 
@@ -25,7 +25,7 @@ type Resource = {
 };
 
 /** The five routes of a plain business table (list, read, create, update, soft delete). */
-function resourceDocs(r: Resource): RouteDoc[] {
+export function resourceDocs(r: Resource): RouteDoc[] {
   const docs: RouteDoc[] = [
     { method: 'get', path: `/api/v1/${r.path}`, tag: r.tag, summary: `List ${r.noun}s`, roles: r.read, query: r.listQuery, success: { status: 200, schema: r.page, description: 'One page' } },
     { method: 'get', path: `/api/v1/${r.path}/:id`, tag: r.tag, summary: `Read one ${r.noun}`, roles: r.read, params: IdParams, success: { status: 200, schema: r.item, description: r.noun }, errors: [404] },
@@ -74,6 +74,16 @@ documentRoutes(
   { method: 'post', path: '/api/v1/users', tag: 'users', summary: 'Create a user with a role', roles: ['owner'], body: CreateUserRequest, success: { status: 201, schema: User, description: 'Created' }, errors: [409] },
   { method: 'patch', path: '/api/v1/users/:id', tag: 'users', summary: 'Change role, name, password or deactivate', roles: ['owner'], params: IdParams, body: UpdateUserRequest, success: { status: 200, schema: User, description: 'Changed' }, errors: [404, 422] },
   ...resourceDocs({ path: 'tub-models', tag: 'tub models', noun: 'tub model', item: TubModel, page: TubModelPage, listQuery: TubModelListQuery, create: CreateTubModelRequest, update: UpdateTubModelRequest, read: ['owner', 'builder', 'sales'], write: ['owner', 'builder'] }),
+  {
+    method: 'post', path: '/api/v1/tub-models/:id/photo', tag: 'tub models', summary: 'Upload or replace the photo of a tub model', roles: ['owner', 'builder'], params: IdParams,
+    success: { status: 201, schema: TubModelPhoto, description: 'Stored; it is now the tub model\'s photo' }, errors: [404, 413, 415],
+    description:
+      'Body: `multipart/form-data` with one file in the field `photo`: JPEG, PNG, GIF or WebP (checked by its bytes), at most 5 MB; optionally a small copy in the field `thumbnail` (same types, at most 256 KB), which lists show. The server makes no thumbnail itself (no image library is installed); without one the thumbnail route serves the original. 415 for anything but those images, 413 when larger; nothing is stored when the upload is refused. A new upload replaces the current photo, which is kept in history. 503 when the server has no uploads folder configured.',
+  },
+  { method: 'get', path: '/api/v1/tub-models/:id/photo', tag: 'tub models', summary: 'The current photo of a tub model', roles: ['owner', 'builder', 'sales'], params: IdParams, success: { status: 200, schema: TubModelPhoto, description: 'The photo' }, errors: [404], description: '404 when the tub model has no photo.' },
+  { method: 'delete', path: '/api/v1/tub-models/:id/photo', tag: 'tub models', summary: 'Remove the photo of a tub model (kept in history)', roles: ['owner', 'builder'], params: IdParams, success: { status: 204, description: 'Removed' }, errors: [404] },
+  { method: 'get', path: '/api/v1/tub-model-photos/:id/file', tag: 'tub models', summary: 'The image of a tub model photo', roles: ['owner', 'builder', 'sales'], params: IdParams, success: { status: 200, description: 'The image bytes with their content type.' }, errors: [404] },
+  { method: 'get', path: '/api/v1/tub-model-photos/:id/thumbnail', tag: 'tub models', summary: 'The thumbnail of a tub model photo', roles: ['owner', 'builder', 'sales'], params: IdParams, success: { status: 200, description: 'The thumbnail bytes with their content type; the original when the upload sent no thumbnail.' }, errors: [404] },
   ...resourceDocs({ path: 'animals', tag: 'animals', noun: 'animal', item: Animal, page: AnimalPage, listQuery: AnimalListQuery, create: CreateAnimalRequest, update: UpdateAnimalRequest, read: ['owner', 'keeper', 'sales'], write: ['owner', 'keeper'] }),
   ...resourceDocs({ path: 'customers', tag: 'customers', noun: 'customer', item: Customer, page: CustomerPage, listQuery: CustomerListQuery, create: CreateCustomerRequest, update: UpdateCustomerRequest, read: ['owner', 'sales'], write: ['owner', 'sales'] }),
   { method: 'get', path: '/api/v1/mail/messages', tag: 'mail', summary: 'Messages caught by the local mail catcher', roles: ['owner'], query: MailListQuery, success: { status: 200, schema: MailPage, description: 'One page' } },

@@ -1,4 +1,4 @@
-import { CustomerQuote, QuoteLinkAcceptRequest, QuoteLinkParams } from '../../../shared/api/quote-links.js';
+import { CustomerQuote, QuoteLinkAcceptRequest, QuoteLinkCheckout, QuoteLinkParams } from '../../../shared/api/quote-links.js';
 import { IdParams } from '../../../shared/api/common.js';
 import {
   AcceptQuoteRequest,
@@ -6,6 +6,8 @@ import {
   CreateOrderRequest,
   CreatePaymentRequest,
   CreateQuoteRequest,
+  CreateRefundRequest,
+  RefundList,
   InvoiceDetail,
   InvoiceListQuery,
   InvoicePage,
@@ -64,8 +66,14 @@ documentRoutes(
   { method: 'get', path: '/api/v1/orders/:id/payments', tag: 'payments', summary: 'Payments of an order', roles: SALES, params: IdParams, success: { status: 200, schema: PaymentList, description: 'Oldest first' }, errors: [404] },
   {
     method: 'post', path: '/api/v1/orders/:id/payments', tag: 'payments', summary: 'Ask for the deposit or the balance through the payment provider', roles: SALES, params: IdParams, body: CreatePaymentRequest, bodyExample: { kind: 'deposit' },
-    success: { status: 201, schema: Payment, description: 'A pending payment with the client secret' }, errors: [404, 409, 422, 502],
-    description: `Creates a payment intent with the provider's SDK. The payment turns succeeded only when the provider's signed event arrives. ${IDEMPOTENT}`,
+    success: { status: 201, schema: Payment, description: 'A pending payment: with `checkoutUrl` (via checkout) or the client secret (via card)' }, errors: [404, 409, 422, 502],
+    description: `With \`via: "checkout"\` creates a hosted checkout session with the provider's SDK and answers its page (\`checkoutUrl\`) for the customer, who comes back to their quote page afterwards; with \`via: "card"\` creates a payment intent for a card taken in the shop. Either way the payment turns succeeded only when the provider's signed event arrives, never from a browser's redirect. ${IDEMPOTENT}`,
+  },
+  { method: 'get', path: '/api/v1/orders/:id/refunds', tag: 'payments', summary: 'Refunds of an order', roles: SALES, params: IdParams, success: { status: 200, schema: RefundList, description: 'Oldest first' }, errors: [404] },
+  {
+    method: 'post', path: '/api/v1/orders/:id/refunds', tag: 'payments', summary: 'Give money back through the payment provider', roles: SALES, params: IdParams, body: CreateRefundRequest,
+    bodyExample: { reason: 'Order cancelled by the customer' }, success: { status: 201, schema: RefundList, description: 'The refunds asked of the provider (one per payment drawn on)' }, errors: [404, 409, 422, 502],
+    description: `Spread over the order's paid payments, newest first; everything still refundable when \`amountCents\` is absent (409 naming \`amountCents\` when more is asked than is left). A refund counts on the order (paid, refunded) only when the provider's signed event says it succeeded; the customer is e-mailed then. ${IDEMPOTENT}`,
   },
   { method: 'post', path: '/api/v1/payments/:id/confirm', tag: 'payments', summary: 'Confirm a payment with a test payment method (demo)', roles: SALES, params: IdParams, body: ConfirmPaymentRequest, bodyExample: { paymentMethod: 'pm_card_visa' }, success: { status: 200, schema: Payment, description: 'The payment as the provider\'s events left it' }, errors: [404, 409, 422, 502] },
   {
@@ -95,5 +103,10 @@ documentRoutes(
   {
     method: 'post', path: '/api/v1/quote-links/:token/decline', tag: 'quotes', summary: 'The customer declines the quote', roles: [], params: QuoteLinkParams,
     success: { status: 200, schema: CustomerQuote, description: 'Declined' }, errors: [404, 409],
+  },
+  {
+    method: 'post', path: '/api/v1/quote-links/:token/pay', tag: 'quotes', summary: 'The customer opens the payment page for the deposit still due', roles: [], params: QuoteLinkParams,
+    success: { status: 200, schema: QuoteLinkCheckout, description: 'Where to send the customer' }, errors: [404, 409, 502],
+    description: 'A hosted checkout session at the payment provider; pressing again reuses the page already opened. The deposit counts when the provider\'s signed event arrives.',
   },
 );

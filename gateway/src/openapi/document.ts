@@ -9,6 +9,7 @@ import './catalog-collection.js';
 import './catalog-orders.js';
 import './catalog-api-keys.js';
 import './catalog-quote-requests.js';
+import './catalog-stock.js';
 import { routes, type RouteDoc } from './route-catalog.js';
 
 const STATUS_TEXT: Record<number, string> = {

@@ -1,17 +1,21 @@
 import { randomBytes } from 'node:crypto';
 import express, { type Request, type Response } from 'express';
 import Stripe from 'stripe';
+import { checkoutPage, TEST_CARDS } from './checkout-page.js';
 
 /**
  * A local stand-in for the payment provider: answers the part of its HTTP API that the official
- * SDK calls for deposits (customers, payment intents) and sends signed webhook events, so the
- * shop's real SDK code runs end to end without leaving this machine.
+ * SDK calls for deposits (customers, payment intents, hosted checkout sessions, refunds), serves
+ * the checkout page a customer pays on, and sends signed webhook events, so the shop's real SDK
+ * code runs end to end without leaving this machine.
  */
 export interface StandinDeps {
   secretKey: string;
   webhookSecret: string;
   /** Where events are delivered; none means they are only kept in the event list. */
   webhookUrl?: string;
+  /** This stand-in's address as a browser reaches it, for checkout page links (default: from the request's Host). */
+  publicUrl?: string;
 }
 
 type Obj = Record<string, unknown> & { id: string };
@@ -28,6 +32,8 @@ export function createApp(deps: StandinDeps) {
   app.disable('x-powered-by');
   const customers = new Map<string, Obj>();
   const intents = new Map<string, Obj>();
+  const sessions = new Map<string, Obj>();
+  const refunds = new Map<string, Obj>();
   const events: Obj[] = [];
   const signer = new Stripe(deps.secretKey);
 
@@ -47,6 +53,40 @@ export function createApp(deps: StandinDeps) {
 
   app.get('/health', (_req, res) => {
     res.json({ status: 'ok' });
+  });
+
+  // The customer's checkout page: no key, the session id in the address is the customer's ticket.
+  app.get('/checkout/:id', (req, res) => {
+    const session = sessions.get(req.params.id);
+    res.status(session ? 200 : 404).type('html').send(checkoutPage(session ?? null));
+  });
+
+  app.post('/checkout/:id/pay', express.urlencoded({ extended: false, limit: '10kb' }), async (req, res) => {
+    const session = sessions.get(req.params.id);
+    if (!session) return res.status(404).type('html').send(checkoutPage(null));
+    if (session.status !== 'open') return res.status(409).type('html').send(checkoutPage(session, 'This payment page has already been used.'));
+    const card = TEST_CARDS.find((c) => c.number === String((req.body as Record<string, string>).card ?? ''));
+    if (!card) return res.status(400).type('html').send(checkoutPage(session, 'Choose one of the test cards.'));
+    if (!card.succeeds) return res.status(402).type('html').send(checkoutPage(session, 'Your card was declined. Nothing was charged; try another card.'));
+    const intentId = newId('pi');
+    const intent: Obj = {
+      id: intentId,
+      object: 'payment_intent',
+      amount: session.amount_total,
+      amount_received: session.amount_total,
+      currency: session.currency,
+      description: session.description ?? null,
+      metadata: session.metadata,
+      status: 'succeeded',
+      payment_method: card.method,
+      created: nowS(),
+      livemode: false,
+    };
+    intents.set(intentId, intent);
+    Object.assign(session, { status: 'complete', payment_status: 'paid', payment_intent: intentId });
+    await emit('checkout.session.completed', session);
+    // The shop learns of the payment from the signed event above; the redirect only brings the customer back.
+    return res.redirect(303, String(session.success_url).replace('{CHECKOUT_SESSION_ID}', session.id));
   });
 
   // The SDK sends form-encoded bodies with a bearer secret key.
@@ -118,6 +158,93 @@ export function createApp(deps: StandinDeps) {
     intent.status = 'canceled';
     await emit('payment_intent.canceled', intent);
     res.json(intent);
+  });
+
+  app.post('/v1/checkout/sessions', (req: Request, res: Response) => {
+    const body = req.body as Record<string, any>;
+    if (body.mode !== 'payment') return providerError(res, 400, 'Only mode=payment is supported here.', 'mode');
+    const items = Array.isArray(body.line_items) ? body.line_items : Object.values(body.line_items ?? {});
+    if (items.length === 0) return providerError(res, 400, 'line_items is required.', 'line_items');
+    let amount = 0;
+    let currency = '';
+    for (const item of items as Record<string, any>[]) {
+      const unit = Number(item?.price_data?.unit_amount);
+      const quantity = Number(item?.quantity ?? 1);
+      if (!Number.isInteger(unit) || unit < 0 || !Number.isInteger(quantity) || quantity < 1) return providerError(res, 400, 'Invalid line item amount or quantity.', 'line_items');
+      currency = String(item.price_data.currency ?? '');
+      amount += unit * quantity;
+    }
+    if (amount < 50) return providerError(res, 400, 'The total must be at least 50 cents.', 'line_items');
+    if (!/^[a-z]{3}$/.test(currency)) return providerError(res, 400, 'Missing or invalid currency.', 'line_items');
+    for (const field of ['success_url', 'cancel_url']) {
+      if (!/^https?:\/\//.test(String(body[field] ?? ''))) return providerError(res, 400, `${field} must be an http(s) URL.`, field);
+    }
+    const id = newId('cs_test');
+    const base = deps.publicUrl ?? `${req.protocol}://${req.get('host')}`;
+    const first = items[0] as Record<string, any>;
+    const session: Obj = {
+      id,
+      object: 'checkout.session',
+      mode: 'payment',
+      status: 'open',
+      payment_status: 'unpaid',
+      amount_total: amount,
+      currency,
+      description: first.price_data?.product_data?.name ?? null,
+      customer_email: body.customer_email ?? null,
+      client_reference_id: body.client_reference_id ?? null,
+      metadata: body.metadata ?? {},
+      payment_intent: null,
+      success_url: body.success_url,
+      cancel_url: body.cancel_url,
+      url: `${base}/checkout/${id}`,
+      created: nowS(),
+      livemode: false,
+    };
+    sessions.set(id, session);
+    res.json(session);
+  });
+
+  app.get('/v1/checkout/sessions/:id', (req, res) => {
+    const session = sessions.get(req.params.id);
+    if (!session) return providerError(res, 404, `No such checkout.session: '${req.params.id}'`, 'id');
+    res.json(session);
+  });
+
+  app.post('/v1/checkout/sessions/:id/expire', async (req, res) => {
+    const session = sessions.get(req.params.id);
+    if (!session) return providerError(res, 404, `No such checkout.session: '${req.params.id}'`, 'id');
+    if (session.status !== 'open') return providerError(res, 400, `Only an open session can be expired; this one is ${session.status}.`, 'id');
+    session.status = 'expired';
+    await emit('checkout.session.expired', session);
+    res.json(session);
+  });
+
+  /** A refund against a succeeded payment; answered as succeeded at once, as test mode does, and announced by an event. */
+  app.post('/v1/refunds', async (req: Request, res: Response) => {
+    const body = req.body as Record<string, any>;
+    const intent = intents.get(String(body.payment_intent ?? ''));
+    if (!intent) return providerError(res, 404, `No such payment_intent: '${body.payment_intent}'`, 'payment_intent');
+    if (intent.status !== 'succeeded') return providerError(res, 400, 'Only a succeeded payment can be refunded.', 'payment_intent');
+    const already = [...refunds.values()].filter((r) => r.payment_intent === intent.id).reduce((sum, r) => sum + Number(r.amount), 0);
+    const left = Number(intent.amount_received) - already;
+    const amount = body.amount === undefined ? left : Number(body.amount);
+    if (!Number.isInteger(amount) || amount <= 0) return providerError(res, 400, 'Invalid refund amount.', 'amount');
+    if (amount > left) return providerError(res, 400, `Refund amount (${amount}) is greater than unrefunded amount on charge (${left}).`, 'amount');
+    const refund: Obj = {
+      id: newId('re'),
+      object: 'refund',
+      amount,
+      currency: intent.currency,
+      payment_intent: intent.id,
+      reason: body.reason ?? null,
+      metadata: body.metadata ?? {},
+      status: 'succeeded',
+      created: nowS(),
+    };
+    refunds.set(refund.id, refund);
+    await emit('refund.created', refund);
+    res.json(refund);
   });
 
   app.get('/v1/events', (_req, res) => {

@@ -13,6 +13,7 @@ import { ordersRoutes } from './orders/orders-routes.js';
 import { plansRoutes } from './plans/plans-routes.js';
 import { quoteLinksRoutes } from './orders/quote-links-routes.js';
 import { quoteRequestsRoutes } from './quote-requests/quote-requests-routes.js';
+import { stockRoutes } from './stock/stock-routes.js';
 import { tubModelsRoutes } from './tub-models/tub-models-routes.js';
 import { auditRoutes } from './audit/audit-routes.js';
 import { internalAuthRoutes } from './auth/internal-auth-routes.js';
@@ -53,7 +54,8 @@ export function createApp(deps: RecordsDeps): express.Express {
   app.use(internalAuthRoutes(deps));
   app.use(usersRoutes(db));
   app.use(auditRoutes(db));
-  app.use(tubModelsRoutes(db));
+  app.use(tubModelsRoutes(db, deps.uploadsDir));
+  app.use(stockRoutes(db));
   app.use(animalsRoutes(db));
   app.use(customersRoutes(db));
   app.use(apiKeysRoutes(db));

@@ -58,7 +58,7 @@ export async function recordsTestApp(options: { seed?: boolean; webhookUrl?: str
     await new Promise<void>((r) => smtp.close(() => r()));
     await database.dispose();
   };
-  return { app, db, dbKind: database.kind, mailStore, stripeWebhookSecret: STRIPE_WEBHOOK_SECRET, close };
+  return { app, db, dbKind: database.kind, mailStore, stripeWebhookSecret: STRIPE_WEBHOOK_SECRET, paymentsUrl: `http://127.0.0.1:${payments.port}`, close };
 }
 
 /** The header the gateway would add for a signed-in user of this role. */

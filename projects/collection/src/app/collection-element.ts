@@ -2,24 +2,31 @@ import { ChangeDetectionStrategy, Component, ViewEncapsulation, computed, input 
 import { MatButton } from '@angular/material/button';
 import { EmptyState, Session, adoptShellSession, injectShellNavigate } from '@tubwright/kit';
 import { AnimalDetail } from './animals/animal-detail';
+import { AnimalForm } from './animals/animal-form';
 import { AnimalList, AnimalListState } from './animals/animal-list';
 import { BreedingPage } from './breeding/breeding-page';
 import { PairingDetail } from './breeding/pairing-detail';
 import { CollectionNav } from './core/collection-nav';
 import { animalListPath, parseCollectionPath, sectionOf } from './core/collection-routes';
 import { EnvironmentView } from './environment/environment-view';
+import { SpeciesPage } from './environment/species-page';
 import { DueList } from './feeding/due-list';
 import { FeedingDay } from './feeding/feeding-day';
+import { AnimalImportPage } from './import/animal-import-page';
 import { RackList } from './racks/rack-list';
 import { RackMap } from './racks/rack-map';
 import { TubLabels } from './racks/tub-labels';
+import { TraitList } from './traits/trait-list';
 
-/** `<tw-collection>`: animals, racks, feeding day, breeding and environment, as the console shows them. */
+/** `<tw-collection>`: animals, racks, feeding day, breeding, traits, environment and species, as the console shows them. */
 @Component({
   selector: 'tw-collection-root',
   changeDetection: ChangeDetectionStrategy.OnPush,
   encapsulation: ViewEncapsulation.None,
-  imports: [CollectionNav, AnimalList, AnimalDetail, RackList, RackMap, TubLabels, DueList, FeedingDay, BreedingPage, PairingDetail, EnvironmentView, EmptyState, MatButton],
+  imports: [
+    CollectionNav, AnimalList, AnimalDetail, AnimalForm, AnimalImportPage, RackList, RackMap, TubLabels, DueList, FeedingDay, BreedingPage, PairingDetail, TraitList, EnvironmentView,
+    SpeciesPage, EmptyState, MatButton,
+  ],
   styleUrl: './collection-element.scss',
   template: `
     @let v = view();
@@ -30,6 +37,27 @@ import { TubLabels } from './racks/tub-labels';
       }
       @case ('animal') {
         <tw-animal-detail [animalId]="v.id" />
+      }
+      @case ('animal-new') {
+        @defer {
+          <tw-animal-form />
+        } @placeholder {
+          <p class="muted" role="status">Loading…</p>
+        }
+      }
+      @case ('animal-edit') {
+        @defer {
+          <tw-animal-form [animalId]="v.id" />
+        } @placeholder {
+          <p class="muted" role="status">Loading…</p>
+        }
+      }
+      @case ('import') {
+        @defer {
+          <tw-animal-import />
+        } @placeholder {
+          <p class="muted" role="status">Loading…</p>
+        }
       }
       @case ('racks') {
         <tw-rack-list />
@@ -54,6 +82,20 @@ import { TubLabels } from './racks/tub-labels';
       }
       @case ('environment') {
         <tw-environment-view [rackId]="v.rackId" />
+      }
+      @case ('traits') {
+        @defer {
+          <tw-trait-list />
+        } @placeholder {
+          <p class="muted" role="status">Loading…</p>
+        }
+      }
+      @case ('species') {
+        @defer {
+          <tw-species-page />
+        } @placeholder {
+          <p class="muted" role="status">Loading…</p>
+        }
       }
       @default {
         <tw-empty-state icon="explore_off" heading="The collection has no page here" [hint]="'Nothing lives at “' + path() + '”.'">

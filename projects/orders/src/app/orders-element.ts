@@ -15,6 +15,8 @@ import { QuoteDetail } from './quotes/quote-detail';
 import { QuoteForm } from './quotes/quote-form';
 import { QuoteList } from './quotes/quote-list';
 import { OrderSettingsPage } from './settings/order-settings-page';
+import { StockForm } from './stock/stock-form';
+import { StockPage } from './stock/stock-page';
 
 const SECTION_LABELS: Record<Section, { label: string; icon: string }> = {
   customers: { label: 'Customers', icon: 'groups' },
@@ -22,10 +24,11 @@ const SECTION_LABELS: Record<Section, { label: string; icon: string }> = {
   orders: { label: 'Orders', icon: 'receipt_long' },
   production: { label: 'Production', icon: 'view_kanban' },
   cutting: { label: 'Batch cutting', icon: 'content_cut' },
+  stock: { label: 'Stock', icon: 'inventory_2' },
   settings: { label: 'Settings', icon: 'tune' },
 };
 
-/** `<tw-orders>`: customers, quotes, orders, the production board, batch cutting and settings. */
+/** `<tw-orders>`: customers, quotes, orders, the production board, batch cutting, stock and settings. */
 @Component({
   selector: 'tw-orders-root',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -33,7 +36,7 @@ const SECTION_LABELS: Record<Section, { label: string; icon: string }> = {
   imports: [
     ShellLink, MatIcon, MatButton, EmptyState,
     CustomerList, CustomerDetail, CustomerForm, QuoteList, QuoteDetail, QuoteForm,
-    OrderList, OrderDetail, ProductionBoard, BatchCutting, OrderSettingsPage,
+    OrderList, OrderDetail, ProductionBoard, BatchCutting, StockPage, StockForm, OrderSettingsPage,
   ],
   styleUrl: './orders-element.scss',
   template: `
@@ -82,6 +85,12 @@ const SECTION_LABELS: Record<Section, { label: string; icon: string }> = {
         }
         @case ('cutting') {
           <tw-batch-cutting [orderIds]="v.orderIds" />
+        }
+        @case ('stock') {
+          <tw-stock-page [kind]="v.kind" />
+        }
+        @case ('stock-item') {
+          <tw-stock-form [id]="v.id" [startKind]="v.kind" [startOffcut]="v.offcut" />
         }
         @case ('settings') {
           <tw-order-settings-page />

@@ -39,6 +39,21 @@ describe('PlanningElement', () => {
     expect(current?.textContent?.trim()).toBe('Saved plans');
   });
 
+  it('opens a comparison under the saved plans and the materials as a section of their own', async () => {
+    const fixture = TestBed.createComponent(PlanningElement);
+    const backend = TestBed.inject(HttpTestingController);
+    const current = () => (fixture.nativeElement as HTMLElement).querySelector('nav a[aria-current="page"]')?.textContent?.trim();
+    fixture.componentRef.setInput('path', 'compare/4/7');
+    await fixture.whenStable();
+    backend.expectOne('/api/v1/plans/4/compare/7');
+    expect(current()).toBe('Saved plans');
+
+    fixture.componentRef.setInput('path', 'materials');
+    await fixture.whenStable();
+    backend.expectOne('/api/v1/materials');
+    expect(current()).toBe('Materials');
+  });
+
   it('asks the shell to navigate with a bubbling tw-navigate event', async () => {
     const fixture = TestBed.createComponent(PlanningElement);
     fixture.componentRef.setInput('path', 'no/such/page');

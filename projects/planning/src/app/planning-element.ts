@@ -3,7 +3,9 @@ import { MatButton } from '@angular/material/button';
 import { EmptyState, ListQuery, Session, adoptShellSession, injectShellNavigate } from '@tubwright/kit';
 import { PlanEditor } from './plan-editor/plan-editor';
 import { PlanningSection, parsePlanningPath, planListPath, sectionOf, tubModelListPath } from './planning-routes';
+import { MaterialsPage } from './materials/materials-page';
 import { PriceListPage } from './price-list/price-list-page';
+import { PlanCompare } from './saved-plans/plan-compare';
 import { PlanList } from './saved-plans/plan-list';
 import { TubModelForm } from './tub-models/tub-model-form';
 import { TubModelList } from './tub-models/tub-model-list';
@@ -12,6 +14,7 @@ const SECTIONS: Array<{ id: PlanningSection; path: string; label: string }> = [
   { id: 'plans', path: 'plans', label: 'Saved plans' },
   { id: 'tub-models', path: 'tub-models', label: 'Tub models' },
   { id: 'price-list', path: 'price-list', label: 'Price list' },
+  { id: 'materials', path: 'materials', label: 'Materials' },
 ];
 
 /** `<tw-planning>`: the planning module as the console shows it. */
@@ -19,7 +22,7 @@ const SECTIONS: Array<{ id: PlanningSection; path: string; label: string }> = [
   selector: 'tw-planning-root',
   changeDetection: ChangeDetectionStrategy.OnPush,
   encapsulation: ViewEncapsulation.None,
-  imports: [PlanList, PlanEditor, TubModelList, TubModelForm, PriceListPage, EmptyState, MatButton],
+  imports: [PlanList, PlanEditor, PlanCompare, TubModelList, TubModelForm, PriceListPage, MaterialsPage, EmptyState, MatButton],
   styleUrl: './planning-element.scss',
   template: `
     <nav class="tw-planning-nav" aria-label="Planning">
@@ -35,6 +38,9 @@ const SECTIONS: Array<{ id: PlanningSection; path: string; label: string }> = [
       @case ('plan') {
         <tw-plan-editor [planId]="v.id" [tubModelId]="v.tubModelId" [navigate]="navigate" />
       }
+      @case ('compare') {
+        <tw-plan-compare [a]="v.a" [b]="v.b" [navigate]="navigate" />
+      }
       @case ('tub-models') {
         <tw-tub-model-list [query]="v.query" (queryChange)="showTubModels($event)" (open)="navigate($event)" />
       }
@@ -43,6 +49,9 @@ const SECTIONS: Array<{ id: PlanningSection; path: string; label: string }> = [
       }
       @case ('price-list') {
         <tw-price-list-page />
+      }
+      @case ('materials') {
+        <tw-materials-page />
       }
       @default {
         <tw-empty-state icon="explore_off" heading="Planning has no page here" [hint]="'Nothing lives at “' + path() + '”.'">

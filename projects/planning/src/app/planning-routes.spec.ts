@@ -1,4 +1,4 @@
-import { parsePlanningPath, planListPath } from './planning-routes';
+import { comparePath, parsePlanningPath, planListPath } from './planning-routes';
 
 describe('parsePlanningPath', () => {
   it('opens the saved plans at the module root, with the list state from the path', () => {
@@ -21,6 +21,15 @@ describe('parsePlanningPath', () => {
     expect(parsePlanningPath('tub-models/new')).toEqual({ page: 'tub-model', id: null });
     expect(parsePlanningPath('tub-models/7')).toEqual({ page: 'tub-model', id: 7 });
     expect(parsePlanningPath('price-list')).toEqual({ page: 'price-list' });
+    expect(parsePlanningPath('materials')).toEqual({ page: 'materials' });
+  });
+
+  it('reads a comparison of two saved plans, in the order given', () => {
+    expect(parsePlanningPath('compare/12/7')).toEqual({ page: 'compare', a: 12, b: 7 });
+    expect(parsePlanningPath(comparePath(3, 4))).toEqual({ page: 'compare', a: 3, b: 4 });
+    expect(parsePlanningPath('compare/12').page).toBe('not-found');
+    expect(parsePlanningPath('compare/12/x').page).toBe('not-found');
+    expect(parsePlanningPath('compare/1/2/3').page).toBe('not-found');
   });
 
   it('says not found for anything else', () => {

@@ -9,16 +9,22 @@ export type PlanningView =
   | { page: 'plan'; id: number | null; tubModelId: number | null }
   | { page: 'tub-models'; query: ListQuery }
   | { page: 'tub-model'; id: number | null }
+  | { page: 'compare'; a: number; b: number }
   | { page: 'price-list' }
+  | { page: 'materials' }
   | { page: 'not-found'; route: string };
 
-export type PlanningSection = 'plans' | 'tub-models' | 'price-list';
+export type PlanningSection = 'plans' | 'tub-models' | 'price-list' | 'materials';
 
 export function parsePlanningPath(path: string): PlanningView {
   const [route = '', search = ''] = splitOnce(path.trim(), '?');
   const segments = route.split('/').filter(Boolean);
   const params = new URLSearchParams(search);
   const [first = '', second, ...rest] = segments;
+  if (first === 'compare') {
+    const [a, b] = [positiveInt(second), positiveInt(rest[0])];
+    return a && b && rest.length === 1 ? { page: 'compare', a, b } : { page: 'not-found', route };
+  }
   if (rest.length) return { page: 'not-found', route };
 
   if (first === '' || first === 'plans') {
@@ -36,6 +42,7 @@ export function parsePlanningPath(path: string): PlanningView {
     return id ? { page: 'tub-model', id } : { page: 'not-found', route };
   }
   if (first === 'price-list' && second === undefined) return { page: 'price-list' };
+  if (first === 'materials' && second === undefined) return { page: 'materials' };
   return { page: 'not-found', route };
 }
 
@@ -43,12 +50,15 @@ export function sectionOf(view: PlanningView): PlanningSection | null {
   switch (view.page) {
     case 'plans':
     case 'plan':
+    case 'compare':
       return 'plans';
     case 'tub-models':
     case 'tub-model':
       return 'tub-models';
     case 'price-list':
       return 'price-list';
+    case 'materials':
+      return 'materials';
     default:
       return null;
   }
@@ -59,6 +69,9 @@ export function planListPath(query: ListQuery, archived: boolean): string {
   if (!archived) return path;
   return path + (path.includes('?') ? '&' : '?') + 'status=archived';
 }
+
+/** Two saved plans side by side: A's unit is the comparison's. */
+export const comparePath = (a: number, b: number) => `compare/${a}/${b}`;
 
 export const tubModelListPath = (query: ListQuery) => toListPath('tub-models', query, TUB_MODEL_LIST_DEFAULTS);
 

@@ -5,6 +5,7 @@ import { clutchesRoutes } from './breeding/clutches-routes.js';
 import { pairingsRoutes } from './breeding/pairings-routes.js';
 import { traitsRoutes } from './breeding/traits-routes.js';
 import { environmentRoutes } from './environment/environment-routes.js';
+import { speciesRoutes } from './environment/species-routes.js';
 import { husbandryRoutes } from './husbandry/husbandry-routes.js';
 import { importExportRoutes } from './import-export/import-export-routes.js';
 import { photosRoutes } from './photos/photos-routes.js';
@@ -27,6 +28,7 @@ export function collectionRoutes(deps: RecordsDeps, stage: 'raw' | 'json'): Rout
   router.use(pairingsRoutes(deps.db, deps.calculator));
   router.use(clutchesRoutes(deps.db, deps.calculator));
   router.use(environmentRoutes(deps.db));
+  router.use(speciesRoutes(deps.db));
   router.use(importExportRoutes(deps.db));
   router.use(profileRoutes(deps.db));
   return router;

@@ -9,7 +9,7 @@ export function customersRoutes(db: Knex) {
     table: 'customers',
     entity: 'customer',
     fields: Object.keys(Customer.shape),
-    searchFields: ['name', 'email', 'city', 'region'],
+    searchFields: ['name', 'email', 'city', 'region', 'address'],
     defaultSort: 'name',
     read: ['owner', 'sales'],
     write: ['owner', 'sales'],

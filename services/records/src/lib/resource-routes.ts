@@ -43,6 +43,8 @@ export interface ResourceSpec {
   update: z.ZodType<Record<string, unknown>>;
   /** Narrows what a caller may see, e.g. sales see only animals offered for sale. */
   visibleTo?: (rows: Knex.QueryBuilder, identity: Identity) => Knex.QueryBuilder;
+  /** Rules beyond the schema, run on a parsed create (id null) or update body before it is written. */
+  check?: (body: Record<string, unknown>, id: number | null) => Promise<void>;
   /** Values to coerce when reading a row (SQLite has no boolean). */
   fromRow?: (item: Record<string, unknown>) => Record<string, unknown>;
 }
@@ -96,6 +98,7 @@ export function resourceRoutes(db: Knex, spec: ResourceSpec): Router {
     allow(...spec.write),
     json(async (req, res) => {
       const body = parseOrThrow(spec.create, req.body);
+      await spec.check?.(body, null);
       const now = nowIso();
       const id = await insertId(db(spec.table), { ...itemToRow(body), created_at: now, updated_at: now });
       await audit(db, req.identity, 'create', spec.entity, id!, body);
@@ -111,6 +114,7 @@ export function resourceRoutes(db: Knex, spec: ResourceSpec): Router {
       const { id } = parseOrThrow(IdParams, req.params);
       const body = parseOrThrow(spec.update, req.body);
       await findLive(id);
+      await spec.check?.(body, id);
       await db(spec.table).where({ id }).update({ ...itemToRow(body), updated_at: nowIso() });
       await audit(db, req.identity, 'update', spec.entity, id, body);
       return toItem(await findLive(id));

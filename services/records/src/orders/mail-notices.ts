@@ -104,7 +104,7 @@ export function quoteMail(quote: QuoteItem, to: string, shop: string, pdf: Buffe
   };
 }
 
-const ORDER_NOTICE_TEXT: Record<'order_accepted' | 'deposit_received' | 'order_ready' | 'order_delivered', (o: OrderItem) => { subject: string; body: string }> = {
+const ORDER_NOTICE_TEXT: Record<'order_accepted' | 'deposit_received' | 'order_ready' | 'order_delivered' | 'refund_issued', (o: OrderItem) => { subject: string; body: string }> = {
   order_accepted: (o) => ({
     subject: `order ${o.number} confirmed`,
     body: `Thank you: your order ${o.number} is confirmed. We start cutting once the deposit of ${formatCents(o.depositDueCents, o.currency)} is received.`,
@@ -123,6 +123,10 @@ const ORDER_NOTICE_TEXT: Record<'order_accepted' | 'deposit_received' | 'order_r
   order_delivered: (o) => ({
     subject: `order ${o.number} handed over`,
     body: `Your order ${o.number} has been handed over. Thank you for your business.`,
+  }),
+  refund_issued: (o) => ({
+    subject: `refund for ${o.number}`,
+    body: `We have refunded ${formatCents(o.refundedCents, o.currency)} in all for order ${o.number} to the card you paid with. Card issuers usually show it within 5 to 10 business days.`,
   }),
 };
 

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { IdParams } from '../../../../shared/api/common.js';
-import { CreateOrderRequest, OrderListQuery, StageChangeRequest, UpdateOrderRequest } from '../../../../shared/api/orders.js';
+import type { Knex } from 'knex';
+import { CreateOrderRequest, OrderListQuery, StageChangeRequest, UpdateOrderRequest, type OrderStatus } from '../../../../shared/api/orders.js';
 import { json } from '../../../common/src/async-handler.js';
 import { ApiError, ForbiddenError } from '../../../common/src/errors.js';
 import { allow } from '../../../common/src/roles.js';
@@ -20,6 +21,19 @@ export const ORDER_READ_ROLES = ['owner', 'sales', 'builder'] as const;
 export const ORDER_WRITE_ROLES = ['owner', 'sales'] as const;
 
 /** The order book and the production board: orders, their delivery details and stage changes. */
+/**
+ * Stock set aside for an order stops being held once the order is finished: a cancelled order's
+ * pieces go back to free stock; a handed-over order used them, so they leave the stock count.
+ */
+async function settleReservations(trx: Knex, orderId: number, stage: OrderStatus): Promise<void> {
+  if (stage !== 'cancelled' && stage !== 'delivered' && stage !== 'picked_up') return;
+  const held = (await trx('stock_reservations').where({ order_id: orderId })) as { stock_item_id: number; quantity: number }[];
+  if (stage !== 'cancelled') {
+    for (const r of held) await trx('stock_items').where({ id: r.stock_item_id }).update({ quantity: trx.raw('CASE WHEN quantity > ? THEN quantity - ? ELSE 0 END', [r.quantity, r.quantity]), updated_at: nowIso() });
+  }
+  await trx('stock_reservations').where({ order_id: orderId }).delete();
+}
+
 export function orderBookRoutes(deps: RecordsDeps): Router {
   const { db } = deps;
   const router = Router();
@@ -86,6 +100,7 @@ export function orderBookRoutes(deps: RecordsDeps): Router {
           throw new ApiError(409, 'balance_due', `Order ${order.number} still owes ${refusal.balanceCents} cents; take the balance before closing it.`, 'stage', { balanceCents: refusal.balanceCents });
         }
         await enterStage(trx, id, stage, actorOf(req), note);
+        await settleReservations(trx, id, stage);
       });
       await audit(db, req.identity, 'stage', 'order', id, { stage });
       const order = await findOrder(db, id);

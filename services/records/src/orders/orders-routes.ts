@@ -4,6 +4,7 @@ import { invoicesRoutes } from './invoices-routes.js';
 import { orderAdminRoutes } from './order-admin-routes.js';
 import { orderBookRoutes } from './order-book-routes.js';
 import { paymentsRoutes, paymentWebhookRoutes } from './payments-routes.js';
+import { refundsRoutes } from './refunds-routes.js';
 import { quotesRoutes } from './quotes-routes.js';
 
 /**
@@ -13,6 +14,6 @@ import { quotesRoutes } from './quotes-routes.js';
 export function ordersRoutes(deps: RecordsDeps, stage: 'raw' | 'json'): Router {
   if (stage === 'raw') return paymentWebhookRoutes(deps);
   const router = Router();
-  router.use(quotesRoutes(deps), orderBookRoutes(deps), paymentsRoutes(deps), invoicesRoutes(deps), orderAdminRoutes(deps));
+  router.use(quotesRoutes(deps), orderBookRoutes(deps), paymentsRoutes(deps), refundsRoutes(deps), invoicesRoutes(deps), orderAdminRoutes(deps));
   return router;
 }

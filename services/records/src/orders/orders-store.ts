@@ -43,6 +43,8 @@ export function toOrderSummary(row: Record<string, any>): OrderSummaryItem {
     deliveryMethod: row.delivery_method,
     deliveryDate: row.delivery_date ?? null,
     deliveryAddress: row.delivery_address,
+    doorwayHeightIn: row.doorway_height_in ?? null,
+    refundedCents: row.refunded_cents ?? 0,
     notes: row.notes,
     createdAt: row.created_at,
     updatedAt: row.updated_at,
@@ -61,7 +63,10 @@ export function toPayment(row: Record<string, any>): PaymentItem {
     amountCents: row.amount_cents,
     currency: row.currency,
     status: row.status,
+    via: row.via ?? 'card',
     providerId: row.provider_id ?? null,
+    checkoutUrl: row.checkout_url ?? null,
+    refundedCents: row.refunded_cents ?? 0,
     failureMessage: row.failure_message ?? null,
     paidAt: row.paid_at ?? null,
     createdAt: row.created_at,
@@ -85,6 +90,7 @@ export interface DeliveryInput {
   deliveryMethod: 'pickup' | 'delivery';
   deliveryDate?: string | null;
   deliveryAddress: string;
+  doorwayHeightIn?: number | null;
   notes: string;
 }
 
@@ -122,6 +128,7 @@ export async function orderFromQuote(db: Knex, quoteId: number, delivery: Delive
       delivery_method: delivery.deliveryMethod,
       delivery_date: delivery.deliveryDate ?? null,
       delivery_address: delivery.deliveryAddress,
+      doorway_height_in: delivery.doorwayHeightIn ?? null,
       notes: delivery.notes,
       created_at: now,
       updated_at: now,

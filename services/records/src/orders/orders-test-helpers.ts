@@ -1,3 +1,5 @@
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
 import type { Express } from 'express';
 import request from 'supertest';
 import Stripe from 'stripe';
@@ -8,6 +10,9 @@ import { asRole, TEST_INTERNAL_SECRET } from '../test-support.js';
 export function asWebhookSystem(): Record<string, string> {
   return { [IDENTITY_HEADER]: signIdentity({ kind: 'gateway', sub: 'payments-webhook', role: 'system' }, TEST_INTERNAL_SECRET) };
 }
+
+/** The header the gateway adds for a customer's quote link (no account). */
+export const asCustomerLink = () => ({ [IDENTITY_HEADER]: signIdentity({ kind: 'gateway', sub: 'customer-link', role: 'system' }, TEST_INTERNAL_SECRET) });
 
 export const sales = () => asRole('sales');
 export const owner = () => asRole('owner');
@@ -44,4 +49,33 @@ export async function payDeposit(app: Express, secret: string, orderId: number) 
   const res = await postWebhook(app, event.payload, event.signature);
   if (res.status !== 200) throw new Error(`webhook: ${res.status} ${JSON.stringify(res.body)}`);
   return payment.body;
+}
+
+/**
+ * A small forwarder playing the gateway: receives the stand-in's signed events and posts them to
+ * the records app with the system identity. Start it before the app (the stand-in needs its URL).
+ */
+export async function webhookForwarder() {
+  const delivered: { payload: string; signature: string; status: number }[] = [];
+  let target: Express | undefined;
+  const server = http.createServer((req, res) => {
+    const chunks: Buffer[] = [];
+    req.on('data', (c: Buffer) => chunks.push(c));
+    req.on('end', async () => {
+      const payload = Buffer.concat(chunks).toString('utf8');
+      const signature = String(req.headers['stripe-signature'] ?? '');
+      const answer = await postWebhook(target!, payload, signature);
+      delivered.push({ payload, signature, status: answer.status });
+      res.writeHead(answer.status, { 'content-type': 'application/json' }).end(JSON.stringify(answer.body));
+    });
+  });
+  await new Promise<void>((r) => server.listen(0, '127.0.0.1', () => r()));
+  return {
+    url: `http://127.0.0.1:${(server.address() as AddressInfo).port}/api/v1/payments/webhook`,
+    delivered,
+    deliverTo: (app: Express) => {
+      target = app;
+    },
+    close: () => new Promise((r) => server.close(r)),
+  };
 }

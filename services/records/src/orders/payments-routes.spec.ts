@@ -1,39 +1,27 @@
-import http from 'node:http';
-import type { AddressInfo } from 'node:net';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { recordsTestApp } from '../test-support.js';
-import { acceptedOrder, asWebhookSystem, builder, owner, postWebhook, sales, signedEvent } from './orders-test-helpers.js';
+import { acceptedOrder, asWebhookSystem, builder, owner, postWebhook, sales, signedEvent, webhookForwarder } from './orders-test-helpers.js';
 
 /**
  * End to end: the provider SDK talks to the stand-in, the stand-in signs and delivers its events to
  * a small forwarder playing the gateway, which posts them to the records app with the system identity.
  */
 let ctx: Awaited<ReturnType<typeof recordsTestApp>>;
-const delivered: { payload: string; signature: string }[] = [];
-let forwarder: http.Server;
+let forwarder: Awaited<ReturnType<typeof webhookForwarder>>;
+let delivered: { payload: string; signature: string }[];
 
 beforeAll(async () => {
-  forwarder = http.createServer((req, res) => {
-    const chunks: Buffer[] = [];
-    req.on('data', (c: Buffer) => chunks.push(c));
-    req.on('end', async () => {
-      const payload = Buffer.concat(chunks).toString('utf8');
-      const signature = String(req.headers['stripe-signature'] ?? '');
-      delivered.push({ payload, signature });
-      const answer = await postWebhook(ctx.app, payload, signature);
-      res.writeHead(answer.status, { 'content-type': 'application/json' }).end(JSON.stringify(answer.body));
-    });
-  });
-  await new Promise<void>((r) => forwarder.listen(0, '127.0.0.1', () => r()));
-  const webhookUrl = `http://127.0.0.1:${(forwarder.address() as AddressInfo).port}/api/v1/payments/webhook`;
-  ctx = await recordsTestApp({ seed: true, webhookUrl });
+  forwarder = await webhookForwarder();
+  delivered = forwarder.delivered;
+  ctx = await recordsTestApp({ seed: true, webhookUrl: forwarder.url });
+  forwarder.deliverTo(ctx.app);
   // 50 % deposit, no tax: an invented shop's settings.
   await request(ctx.app).patch('/api/v1/order-settings').set(owner()).send({ taxRatePercent: 0, depositPercent: 50 });
 });
 afterAll(async () => {
   await ctx.close();
-  await new Promise((r) => forwarder.close(r));
+  await forwarder.close();
 });
 
 describe('deposits through the provider SDK and its signed webhook', () => {

@@ -13,25 +13,84 @@ import { insertId, nowIso } from '../db/knex.js';
 import { idempotent } from './idempotency.js';
 import { notifyOrder } from './mail-notices.js';
 import { enterStage, findOrder, orderPayments, toPayment } from './orders-store.js';
+import { amountDue, startCheckout } from './checkout.js';
+import { providerError } from './provider-error.js';
 import { actorOf } from './quotes-routes.js';
 
 export const PAYMENT_ROLES = ['owner', 'sales'] as const;
 const WEBHOOK_ACTOR = 'payments-webhook';
 
-/** The provider's errors become ours: a declined card is the customer's problem (422), anything else is the provider's (502). */
-function providerError(err: unknown): ApiError {
-  if (err instanceof Stripe.errors.StripeCardError) return new ApiError(422, 'card_declined', err.message || 'The card was declined.', 'paymentMethod');
-  if (err instanceof Stripe.errors.StripeError) return new ApiError(502, 'payments_unavailable', `The payment provider refused or did not answer: ${err.message}`);
-  return new ApiError(502, 'payments_unavailable', 'The payment provider did not answer; try again in a moment.');
-}
-
-async function findPayment(db: Knex, id: number) {
+export async function findPayment(db: Knex, id: number) {
   const row = await db('payments').where({ id }).first();
   if (!row) throw new NotFoundError(`No payment with id ${id}.`);
   return row as Record<string, any>;
 }
 
-type ApplyOutcome = { duplicate: boolean; depositPaidOrderId: number | null };
+type ApplyOutcome = { duplicate: boolean; depositPaidOrderId: number | null; refundedOrderId: number | null };
+type Row = Record<string, any>;
+
+/** A payment the provider reports paid: counted once on the order, which leaves awaiting_deposit when the deposit is covered. */
+async function markSucceeded(trx: Knex, payment: Row, now: string, raw: string, label: string, extra: Row, outcome: ApplyOutcome): Promise<void> {
+  await trx('payments').where({ id: payment.id }).update({ status: 'succeeded', paid_at: now, raw_event_json: raw, failure_message: null, updated_at: now, ...extra });
+  const order = await trx('orders').where({ id: payment.order_id }).first();
+  const paid = order.paid_cents + payment.amount_cents;
+  const balance = Math.max(0, order.total_cents - paid);
+  await trx('orders').where({ id: order.id }).update({ paid_cents: paid, balance_cents: balance, updated_at: now });
+  if (order.status === 'awaiting_deposit' && paid >= order.deposit_due_cents) {
+    await enterStage(trx, order.id, 'deposit_paid', WEBHOOK_ACTOR, `Payment ${label}`, now);
+    outcome.depositPaidOrderId = order.id;
+  }
+  if (balance === 0) await trx('invoices').where({ order_id: order.id, status: 'open' }).update({ status: 'paid', updated_at: now });
+}
+
+async function applyIntentEvent(trx: Knex, event: Stripe.Event, intent: Row, outcome: ApplyOutcome): Promise<void> {
+  const payment = await trx('payments').where({ provider_id: intent.id }).first();
+  // Intents made elsewhere (another app on the same account, or behind a checkout) are recorded and otherwise ignored.
+  if (!payment || payment.status === 'succeeded') return;
+  const now = nowIso();
+  const raw = JSON.stringify(event);
+  if (event.type === 'payment_intent.succeeded') {
+    await markSucceeded(trx, payment, now, raw, intent.id, {}, outcome);
+  } else if (event.type === 'payment_intent.payment_failed') {
+    const message = (intent.last_payment_error as { message?: string } | null | undefined)?.message ?? 'Payment failed.';
+    await trx('payments').where({ id: payment.id }).update({ status: 'failed', failure_message: message, raw_event_json: raw, updated_at: now });
+  } else if (event.type === 'payment_intent.canceled') {
+    await trx('payments').where({ id: payment.id }).update({ status: 'canceled', raw_event_json: raw, updated_at: now });
+  }
+}
+
+async function applyCheckoutEvent(trx: Knex, event: Stripe.Event, session: Row, outcome: ApplyOutcome): Promise<void> {
+  const payment = await trx('payments').where({ provider_id: session.id }).first();
+  if (!payment || payment.status === 'succeeded') return;
+  const now = nowIso();
+  const raw = JSON.stringify(event);
+  if (event.type === 'checkout.session.completed' && session.payment_status === 'paid') {
+    await markSucceeded(trx, payment, now, raw, `${session.id} (checkout)`, { intent_id: session.payment_intent ?? null }, outcome);
+  } else if (event.type === 'checkout.session.expired') {
+    await trx('payments').where({ id: payment.id }).update({ status: 'canceled', failure_message: 'The payment page expired unpaid.', raw_event_json: raw, updated_at: now });
+  }
+}
+
+/** A refund the provider reports: money leaves the order once, whatever order the events arrive in. */
+async function applyRefundEvent(trx: Knex, refund: Row, outcome: ApplyOutcome): Promise<void> {
+  const ownId = Number((refund.metadata as Row | undefined)?.refund_id);
+  const row = (Number.isInteger(ownId) && (await trx('refunds').where({ id: ownId }).first())) || (await trx('refunds').where({ provider_id: refund.id }).first());
+  if (!row || row.status === 'succeeded') return;
+  const now = nowIso();
+  if (refund.status === 'failed' || refund.status === 'canceled') {
+    await trx('refunds').where({ id: row.id }).update({ status: 'failed', provider_id: refund.id, updated_at: now });
+    return;
+  }
+  if (refund.status !== 'succeeded') return;
+  await trx('refunds').where({ id: row.id }).update({ status: 'succeeded', provider_id: refund.id, refunded_at: now, updated_at: now });
+  await trx('payments').where({ id: row.payment_id }).increment('refunded_cents', row.amount_cents);
+  const order = await trx('orders').where({ id: row.order_id }).first();
+  const paid = order.paid_cents - row.amount_cents;
+  // A cancelled order owes nothing more; an open one owes again what was given back.
+  const balance = order.status === 'cancelled' ? order.balance_cents : Math.max(0, order.total_cents - paid);
+  await trx('orders').where({ id: order.id }).update({ paid_cents: paid, refunded_cents: order.refunded_cents + row.amount_cents, balance_cents: balance, updated_at: now });
+  outcome.refundedOrderId = order.id;
+}
 
 /**
  * Applies one verified provider event exactly once: the event id is recorded in the same
@@ -39,33 +98,13 @@ type ApplyOutcome = { duplicate: boolean; depositPaidOrderId: number | null };
  */
 export async function applyPaymentEvent(db: Knex, event: Stripe.Event): Promise<ApplyOutcome> {
   return db.transaction(async (trx) => {
-    if (await trx('payment_events').where({ event_id: event.id }).first()) return { duplicate: true, depositPaidOrderId: null };
-    const intent = event.data.object as Partial<Stripe.PaymentIntent> & { id: string };
-    await trx('payment_events').insert({ event_id: event.id, type: event.type, provider_id: intent.id ?? null, received_at: nowIso() });
-    const outcome: ApplyOutcome = { duplicate: false, depositPaidOrderId: null };
-    if (!event.type.startsWith('payment_intent.')) return outcome;
-    const payment = await trx('payments').where({ provider_id: intent.id }).first();
-    // Intents made elsewhere (another app on the same account) are recorded and otherwise ignored.
-    if (!payment || payment.status === 'succeeded') return outcome;
-    const now = nowIso();
-    const raw = JSON.stringify(event);
-    if (event.type === 'payment_intent.succeeded') {
-      await trx('payments').where({ id: payment.id }).update({ status: 'succeeded', paid_at: now, raw_event_json: raw, failure_message: null, updated_at: now });
-      const order = await trx('orders').where({ id: payment.order_id }).first();
-      const paid = order.paid_cents + payment.amount_cents;
-      const balance = Math.max(0, order.total_cents - paid);
-      await trx('orders').where({ id: order.id }).update({ paid_cents: paid, balance_cents: balance, updated_at: now });
-      if (order.status === 'awaiting_deposit' && paid >= order.deposit_due_cents) {
-        await enterStage(trx, order.id, 'deposit_paid', WEBHOOK_ACTOR, `Payment ${intent.id}`, now);
-        outcome.depositPaidOrderId = order.id;
-      }
-      if (balance === 0) await trx('invoices').where({ order_id: order.id, status: 'open' }).update({ status: 'paid', updated_at: now });
-    } else if (event.type === 'payment_intent.payment_failed') {
-      const message = (intent.last_payment_error as { message?: string } | null | undefined)?.message ?? 'Payment failed.';
-      await trx('payments').where({ id: payment.id }).update({ status: 'failed', failure_message: message, raw_event_json: raw, updated_at: now });
-    } else if (event.type === 'payment_intent.canceled') {
-      await trx('payments').where({ id: payment.id }).update({ status: 'canceled', raw_event_json: raw, updated_at: now });
-    }
+    const outcome: ApplyOutcome = { duplicate: false, depositPaidOrderId: null, refundedOrderId: null };
+    if (await trx('payment_events').where({ event_id: event.id }).first()) return { ...outcome, duplicate: true };
+    const object = event.data.object as unknown as Row & { id: string };
+    await trx('payment_events').insert({ event_id: event.id, type: event.type, provider_id: object.id ?? null, received_at: nowIso() });
+    if (event.type.startsWith('payment_intent.')) await applyIntentEvent(trx, event, object, outcome);
+    else if (event.type.startsWith('checkout.session.')) await applyCheckoutEvent(trx, event, object, outcome);
+    else if (event.type.startsWith('refund.')) await applyRefundEvent(trx, object, outcome);
     return outcome;
   });
 }
@@ -90,6 +129,10 @@ export function paymentWebhookRoutes(deps: RecordsDeps): Router {
       if (outcome.depositPaidOrderId !== null) {
         await audit(deps.db, req.identity, 'deposit_paid', 'order', outcome.depositPaidOrderId, { event: event.id });
         await notifyOrder(deps.db, deps.mailer, 'deposit_received', await findOrder(deps.db, outcome.depositPaidOrderId));
+      }
+      if (outcome.refundedOrderId !== null) {
+        await audit(deps.db, req.identity, 'refunded', 'order', outcome.refundedOrderId, { event: event.id });
+        await notifyOrder(deps.db, deps.mailer, 'refund_issued', await findOrder(deps.db, outcome.refundedOrderId));
       }
       return { received: true as const, duplicate: outcome.duplicate };
     }),
@@ -120,9 +163,12 @@ export function paymentsRoutes(deps: RecordsDeps): Router {
       const body = parseOrThrow(CreatePaymentRequest, req.body ?? {});
       const order = await findOrder(db, id);
       return idempotent(db, req, res, async () => {
-        if (order.status === 'cancelled' || order.status === 'closed') throw new ConflictError(`Order ${order.number} is ${order.status}; it takes no payments.`);
-        const amountCents = body.kind === 'deposit' ? order.depositDueCents - order.paidCents : order.balanceCents;
-        if (amountCents <= 0) throw new ConflictError(body.kind === 'deposit' ? `The deposit of order ${order.number} is already paid.` : `Order ${order.number} owes nothing.`, 'kind');
+        const amountCents = amountDue(order, body.kind);
+        if (body.via === 'checkout') {
+          const paymentId = await startCheckout(deps, order, body.kind, amountCents, actorOf(req));
+          await audit(db, req.identity, 'create', 'payment', paymentId, { orderId: id, kind: body.kind, amountCents, via: 'checkout' });
+          return { status: 201, body: toPayment(await findPayment(db, paymentId)) };
+        }
         let intent: Stripe.PaymentIntent;
         try {
           intent = await deps.payments.client.paymentIntents.create({
@@ -138,6 +184,7 @@ export function paymentsRoutes(deps: RecordsDeps): Router {
         const paymentId = await insertId(db('payments'), {
           order_id: id,
           provider_id: intent.id,
+          via: 'card',
           kind: body.kind,
           amount_cents: amountCents,
           currency: order.currency,
@@ -159,6 +206,7 @@ export function paymentsRoutes(deps: RecordsDeps): Router {
       const { id } = parseOrThrow(IdParams, req.params);
       const { paymentMethod } = parseOrThrow(ConfirmPaymentRequest, req.body ?? {});
       const payment = await findPayment(db, id);
+      if (payment.via === 'checkout') throw new ConflictError(`Payment ${id} is paid by the customer on the provider's page, not confirmed here.`);
       if (payment.status === 'succeeded' || payment.status === 'canceled') throw new ConflictError(`Payment ${id} is ${payment.status}.`);
       try {
         await deps.payments.client.paymentIntents.confirm(payment.provider_id, { payment_method: paymentMethod });

@@ -1,8 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { IDENTITY_HEADER, signIdentity } from '../../../common/src/internal-identity.js';
-import { recordsTestApp, TEST_INTERNAL_SECRET } from '../test-support.js';
-import { sales } from './orders-test-helpers.js';
+import { recordsTestApp } from '../test-support.js';
+import { asCustomerLink, sales } from './orders-test-helpers.js';
 
 let ctx: Awaited<ReturnType<typeof recordsTestApp>>;
 beforeAll(async () => {
@@ -11,7 +10,7 @@ beforeAll(async () => {
 afterAll(() => ctx.close());
 
 /** What the gateway forwards for anyone opening /api/v1/quote-links/… (no account). */
-const customer = () => ({ [IDENTITY_HEADER]: signIdentity({ kind: 'gateway', sub: 'customer-link', role: 'system' }, TEST_INTERNAL_SECRET) });
+const customer = asCustomerLink;
 
 /** A sent quote and the link its e-mail carried. */
 async function sentQuote(customerId: number) {

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { Knex } from 'knex';
 import type { z } from 'zod';
+import type { OrderStatus } from '../../../../shared/api/orders.js';
 import { CustomerQuote, QuoteLinkAcceptRequest, QuoteLinkParams } from '../../../../shared/api/quote-links.js';
 import { json } from '../../../common/src/async-handler.js';
 import { ConflictError, NotFoundError } from '../../../common/src/errors.js';
@@ -10,6 +11,8 @@ import type { RecordsDeps } from '../app.js';
 import { audit } from '../audit/audit-log.js';
 import { nowIso } from '../db/knex.js';
 import { shopName } from './mail-notices.js';
+import { amountDue, startCheckout } from './checkout.js';
+import { findOrder } from './orders-store.js';
 import { quoteLinkMatches } from './quote-link-token.js';
 import { acceptQuote } from './quotes-routes.js';
 import { findQuote, type QuoteItem } from './quotes-store.js';
@@ -64,11 +67,35 @@ export function quoteLinksRoutes(deps: RecordsDeps): Router {
     }),
   );
 
+  router.post(
+    `${base}/pay`,
+    allow(),
+    json(async (req) => {
+      const quote = await quoteFor(req.params['token']);
+      if (!quote.orderId) throw new ConflictError(`Quote ${quote.number} is ${quote.status}; accept it first, then pay the deposit.`);
+      const order = await findOrder(db, quote.orderId);
+      if (order.status !== 'awaiting_deposit') throw new ConflictError(`Order ${order.number} is not waiting for a deposit.`);
+      const amountCents = amountDue(order, 'deposit');
+      // A second press (or a reload) reuses the page already opened for this amount.
+      const open = (await db('payments')
+        .where({ order_id: order.id, kind: 'deposit', via: 'checkout', status: 'pending', amount_cents: amountCents })
+        .orderBy('id', 'desc')
+        .first('checkout_url')) as { checkout_url: string | null } | undefined;
+      if (open?.checkout_url) return { checkoutUrl: open.checkout_url };
+      const paymentId = await startCheckout(deps, order, 'deposit', amountCents, 'customer-link');
+      await audit(db, req.identity, 'create (customer link)', 'payment', paymentId, { orderId: order.id, kind: 'deposit', amountCents, via: 'checkout' });
+      const row = (await db('payments').where({ id: paymentId }).first('checkout_url')) as { checkout_url: string };
+      return { checkoutUrl: row.checkout_url };
+    }),
+  );
+
   return router;
 }
 
 async function customerView(db: Knex, quote: QuoteItem): Promise<CustomerQuoteView> {
-  const order = quote.orderId ? ((await db('orders').where({ id: quote.orderId }).first('number')) as { number: string } | undefined) : undefined;
+  const order = quote.orderId
+    ? ((await db('orders').where({ id: quote.orderId }).first('number', 'status', 'paid_cents', 'deposit_due_cents')) as { number: string; status: OrderStatus; paid_cents: number; deposit_due_cents: number } | undefined)
+    : undefined;
   return {
     number: quote.number,
     shop: await shopName(db),
@@ -83,5 +110,8 @@ async function customerView(db: Knex, quote: QuoteItem): Promise<CustomerQuoteVi
     totalCents: quote.totalCents,
     depositCents: quote.depositCents,
     orderNumber: order?.number ?? null,
+    orderStatus: order?.status ?? null,
+    paidCents: order?.paid_cents ?? 0,
+    depositDueNowCents: order && order.status === 'awaiting_deposit' ? Math.max(0, order.deposit_due_cents - order.paid_cents) : 0,
   };
 }

@@ -23,6 +23,13 @@ const count = async (table: string, where: Record<string, unknown> = {}) => Numb
 const mailsTo = (address: string) => ctx.mailStore.list().filter((m) => m.to.some((t) => t.includes(address)));
 
 describe('POST /api/v1/quote-requests', () => {
+  it("marks a new customer from a partner's secret key as a partner lead", async () => {
+    const key = await request(ctx.app).post('/api/v1/api-keys').set(asRole('owner')).send({ name: 'Partner shop', kind: 'secret', scopes: ['quote-requests'] });
+    expect(key.status).toBe(201);
+    expect((await post(visitor('partner.lead@example.test'), asKey(['quote-requests'], key.body.id))).status).toBe(201);
+    expect(await ctx.db('customers').where({ email: 'partner.lead@example.test' }).first()).toMatchObject({ source: 'partner-api' });
+  });
+
   it('creates a lead and a draft quote, e-mails the shop and the visitor, and hides ids from a key', async () => {
     const res = await post(visitor('Wren.Talbot@Example.test'));
     expect(res.status).toBe(201);
@@ -40,7 +47,8 @@ describe('POST /api/v1/quote-requests', () => {
     expect(res.body.estimate).toEqual({ totalCents: priceCents + Math.round(priceCents * 0.065), currency: 'usd' });
 
     const customer = await ctx.db('customers').where({ email: 'wren.talbot@example.test' }).first();
-    expect(customer).toMatchObject({ name: 'Wren Talbot', phone: '555-0142' });
+    // Key 7 is not a partner's secret key, so the lead came through the website widget.
+    expect(customer).toMatchObject({ name: 'Wren Talbot', phone: '555-0142', source: 'website-widget' });
     expect(customer.notes).toMatch(/^Website lead from https:\/\/shop\.example\/sizer/);
     const quote = await ctx.db('quotes').where({ number: res.body.reference }).first();
     expect(quote).toMatchObject({ customer_id: customer.id, status: 'draft', created_by: 'api-key:key:7' });

@@ -67,11 +67,11 @@ export function demoAnimals(today = new Date('2026-12-01T00:00:00Z')) {
 }
 
 export const DEMO_CUSTOMERS = [
-  { name: 'Priya Venkataraman', email: 'priya.v@example.test', phone: '555-0141', city: 'Harlow Creek', region: 'OH' },
-  { name: 'Declan Whitcombe', email: 'declan@example.test', phone: '555-0177', city: 'Stonebridge', region: 'PA' },
-  { name: 'Scaled Acres Breeding (Lena Ortiz)', email: 'lena@scaled-acres.example.test', phone: '555-0102', city: 'Red Hollow', region: 'TX' },
-  { name: 'Marcus Feld', email: 'mfeld@example.test', phone: '555-0158', city: 'Lake Orrin', region: 'MN' },
-  { name: 'Hollow Log Exotics (Ada Brennan)', email: 'ada@hollowlog.example.test', phone: '555-0119', city: 'Pine Ford', region: 'GA' },
+  { name: 'Priya Venkataraman', email: 'priya.v@example.test', phone: '555-0141', city: 'Harlow Creek', region: 'OH', address: '212 Birchwood Row, Harlow Creek, OH', source: 'website-widget' },
+  { name: 'Declan Whitcombe', email: 'declan@example.test', phone: '555-0177', city: 'Stonebridge', region: 'PA', source: 'phone-or-email' },
+  { name: 'Scaled Acres Breeding (Lena Ortiz)', email: 'lena@scaled-acres.example.test', phone: '555-0102', city: 'Red Hollow', region: 'TX', address: '9 Mesquite Spur, Red Hollow, TX', source: 'partner-api' },
+  { name: 'Marcus Feld', email: 'mfeld@example.test', phone: '555-0158', city: 'Lake Orrin', region: 'MN', source: 'event' },
+  { name: 'Hollow Log Exotics (Ada Brennan)', email: 'ada@hollowlog.example.test', phone: '555-0119', city: 'Pine Ford', region: 'GA', address: '48 Tanner Mill Rd, Pine Ford, GA', source: 'referral' },
   { name: 'Tobias Engstrom', email: 'tobias.e@example.test', phone: '555-0163', city: 'Westmere', region: 'WA' },
   { name: 'Keisha Dunmore', email: 'keisha.d@example.test', phone: '555-0125', city: 'Fallowfield', region: 'NC' },
   { name: 'Coil & Clutch Reptiles (Sam Ridley)', email: 'sam@coilclutch.example.test', phone: '555-0190', city: 'Brookvale', region: 'FL' },

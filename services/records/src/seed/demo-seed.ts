@@ -4,6 +4,7 @@ import { hashPassword } from '../users/passwords.js';
 import { seedCollectionDemo } from './collection-demo.js';
 import { seedOrdersDemo } from './orders-demo.js';
 import { seedPlansDemo } from './plans-demo.js';
+import { seedStockDemo } from './stock-demo.js';
 import { DEMO_CUSTOMERS, DEMO_PASSWORD, DEMO_SHOP, DEMO_TUB_MODELS, DEMO_USERS, demoAnimals } from './demo-data.js';
 
 const toRow = (o: Record<string, unknown>) =>
@@ -21,11 +22,12 @@ export async function seedDemoData(db: Knex): Promise<boolean> {
     await trx('settings').insert({ key: 'shop', value_json: JSON.stringify(DEMO_SHOP), ...stamp });
     await trx('tub_models').insert(DEMO_TUB_MODELS.map((t) => ({ ...toRow(t), ...stamp })));
     await trx('animals').insert(demoAnimals().map((a) => ({ ...toRow(a), ...stamp })));
-    await trx('customers').insert(DEMO_CUSTOMERS.map((c) => ({ notes: '', ...toRow(c), ...stamp })));
+    await trx('customers').insert(DEMO_CUSTOMERS.map((c) => ({ notes: '', address: '', source: 'walk-in', ...toRow(c), ...stamp })));
   });
   // Each area seeds its own invented records on top of the people, tubs, animals and customers.
   await seedPlansDemo(db);
   await seedCollectionDemo(db);
   await seedOrdersDemo(db);
+  await seedStockDemo(db);
   return true;
 }

@@ -66,7 +66,7 @@ export async function seedOrdersDemo(db: Knex): Promise<boolean> {
     if (demo.state !== 'draft') await db('quotes').where({ id: quoteId }).update({ sent_at: now });
     if (demo.state === 'declined') await db('quotes').where({ id: quoteId }).update({ status: 'declined', decided_at: now });
     if (demo.state === 'draft' || demo.state === 'sent' || demo.state === 'declined') continue;
-    const orderId = await orderFromQuote(db, quoteId, { deliveryMethod: demo.state === 'closed' ? 'pickup' : 'delivery', deliveryDate: isoDatePlusDays(21), deliveryAddress: '', notes: '' }, by);
+    const orderId = await orderFromQuote(db, quoteId, { deliveryMethod: demo.state === 'closed' ? 'pickup' : 'delivery', deliveryDate: isoDatePlusDays(21), deliveryAddress: '', doorwayHeightIn: demo.state === 'assembly' ? 78 : null, notes: '' }, by);
     if (demo.state === 'awaiting_deposit') continue;
     await db.transaction(async (trx) => {
       const order = await trx('orders').where({ id: orderId }).first();

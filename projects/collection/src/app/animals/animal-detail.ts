@@ -1,6 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, linkedSignal, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { MatButton } from '@angular/material/button';
+import { MatAnchor, MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
 import { ErrorBanner, describeApiError } from '@tubwright/kit';
 import { of } from 'rxjs';
@@ -24,7 +24,7 @@ const PAGE = 50;
 @Component({
   selector: 'tw-animal-detail',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [MatButton, MatIcon, ErrorBanner, LineChart, EventForm, GeneEditor, MoveAnimal, PhotoGallery, ShellLink],
+  imports: [MatButton, MatAnchor, MatIcon, ErrorBanner, LineChart, EventForm, GeneEditor, MoveAnimal, PhotoGallery, ShellLink],
   templateUrl: './animal-detail.html',
   styleUrl: './animal-detail.scss',
 })

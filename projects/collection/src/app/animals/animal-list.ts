@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, output, signal } from '@angular/core';
-import { MatButton } from '@angular/material/button';
+import { MatAnchor, MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
@@ -21,7 +21,7 @@ export interface AnimalListState {
 @Component({
   selector: 'tw-animal-list',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [MatTableModule, MatSortModule, MatFormFieldModule, MatInput, MatButton, MatIcon, DataTable, ErrorBanner, PageHeader, ShellLink],
+  imports: [MatTableModule, MatSortModule, MatFormFieldModule, MatInput, MatButton, MatAnchor, MatIcon, DataTable, ErrorBanner, PageHeader, ShellLink],
   templateUrl: './animal-list.html',
   styleUrl: './animal-list.scss',
 })

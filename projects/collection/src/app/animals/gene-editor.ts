@@ -8,13 +8,14 @@ import { ErrorBanner, Page, describeApiError } from '@tubwright/kit';
 import { CollectionApi } from '../core/collection-api';
 import type { AnimalGene, Trait } from '../core/collection-types';
 import { GeneRow, GeneState, STATE_LABELS, rowsFromGenes, statesFor, toSetGenesRequest } from './gene-rows';
+import { ShellLink } from '../core/shell-link';
 import { geneLabel } from './gene-text';
 
 /** An animal's genes: shown as keepers write them, edited against the shop's trait list. */
 @Component({
   selector: 'tw-gene-editor',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [MatButton, MatIconButton, MatIcon, MatFormFieldModule, MatInput, ErrorBanner],
+  imports: [MatButton, MatIconButton, MatIcon, MatFormFieldModule, MatInput, ErrorBanner, ShellLink],
   template: `
     @if (!editing()) {
       @if (genes().length) {
@@ -66,7 +67,7 @@ import { geneLabel } from './gene-text';
           <button mat-button type="button" (click)="editing.set(false)">Cancel</button>
           <button mat-flat-button type="submit" [disabled]="saving()">Save genes</button>
         </div>
-        <p class="muted">A trait left out is normal. Pairing outcomes use these genes.</p>
+        <p class="muted">A trait left out is normal. Pairing outcomes use these genes. Traits and their modes come from the <a class="link" twLink="traits">trait list</a>.</p>
       </form>
     }
   `,

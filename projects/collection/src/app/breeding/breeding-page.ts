@@ -1,6 +1,6 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, Injector, computed, inject, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { MatButton } from '@angular/material/button';
+import { MatAnchor, MatButton } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
@@ -11,14 +11,16 @@ import type { Clutch, Pairing } from '../core/collection-types';
 import { formatDay } from '../core/format';
 import { ShellLink } from '../core/shell-link';
 import { PAIRING_STATUS_LABELS, seasonOf } from './breeding-text';
+import { openHatchDialog } from './open-hatch-dialog';
 
 /** Pairings of the season and the clutches in the incubator; plan a new pairing here. */
 @Component({
   selector: 'tw-breeding-page',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [MatButton, MatIcon, MatFormFieldModule, MatInput, ErrorBanner, PageHeader, ShellLink],
+  imports: [MatButton, MatAnchor, MatIcon, MatFormFieldModule, MatInput, ErrorBanner, PageHeader, ShellLink],
   template: `
     <tw-page-header heading="Breeding" subheading="Pairings, what they can produce, and clutches with their expected hatch.">
+      <a mat-button twLink="traits"><mat-icon>genetics</mat-icon>Trait list</a>
       <button mat-stroked-button type="button" (click)="adding.set(!adding())" [attr.aria-expanded]="adding()"><mat-icon>add</mat-icon>Plan a pairing</button>
     </tw-page-header>
 
@@ -110,7 +112,13 @@ import { PAIRING_STATUS_LABELS, seasonOf } from './breeding-text';
                         <br /><span class="status status-warn">{{ c.incubationWarning }}</span>
                       }
                     </td>
-                    <td>{{ c.hatchedOn ? formatDay(c.hatchedOn) + ' (' + c.hatchlingCount + ')' : '—' }}</td>
+                    <td>
+                      @if (c.hatchedOn) {
+                        {{ formatDay(c.hatchedOn) }} ({{ c.hatchlingCount }})
+                      } @else {
+                        <button mat-stroked-button type="button" (click)="recordHatch(c)" [attr.aria-label]="'Record the hatch of ' + pairingName(c.pairingId) + ', laid ' + formatDay(c.laidOn)">Record hatch</button>
+                      }
+                    </td>
                   </tr>
                 }
               </tbody>
@@ -130,6 +138,7 @@ import { PAIRING_STATUS_LABELS, seasonOf } from './breeding-text';
 export class BreedingPage {
   private readonly api = inject(CollectionApi);
   private readonly navigate = injectShellNavigate();
+  private readonly injector = inject(Injector);
 
   protected readonly pairings = rxResource({ stream: () => this.api.get<Page<Pairing>>('/pairings', { limit: 100, sort: '-createdAt' }) });
   protected readonly clutches = rxResource({ stream: () => this.api.get<Page<Clutch>>('/clutches', { limit: 100, sort: '-laidOn' }) });
@@ -158,6 +167,13 @@ export class BreedingPage {
   protected pairingName(id: number): string {
     const p = this.pairings.hasValue() ? this.pairings.value().items.find((x) => x.id === id) : undefined;
     return p ? `${p.sire.code} × ${p.dam.code}` : `Pairing ${id}`;
+  }
+
+  protected recordHatch(clutch: Clutch): void {
+    openHatchDialog(this.injector, clutch, this.pairingName(clutch.pairingId)).subscribe((result) => {
+      this.clutches.reload();
+      if (result?.open) this.navigate(result.open);
+    });
   }
 
   protected create(): void {

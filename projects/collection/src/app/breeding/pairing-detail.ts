@@ -1,15 +1,16 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, Injector, computed, inject, input, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButton } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
-import { ApiError, ErrorBanner, Page, describeApiError } from '@tubwright/kit';
+import { ApiError, ErrorBanner, Page, describeApiError, injectShellNavigate } from '@tubwright/kit';
 import { CollectionApi } from '../core/collection-api';
 import type { Clutch, ObservationKind, Pairing, PairingOutcomesView, PairingStatus } from '../core/collection-types';
 import { formatDay, formatPercent, todayUtc } from '../core/format';
 import { ShellLink } from '../core/shell-link';
 import { PAIRING_STATUSES, PAIRING_STATUS_LABELS, expectedHatchPreview } from './breeding-text';
+import { openHatchDialog } from './open-hatch-dialog';
 
 /** One pairing: its progress, what it can produce (exact genetics), and its clutches. */
 @Component({
@@ -41,6 +42,8 @@ export class PairingDetail {
   readonly pairingId = input.required<number>();
 
   private readonly api = inject(CollectionApi);
+  private readonly injector = inject(Injector);
+  private readonly navigate = injectShellNavigate();
   protected readonly pairing = rxResource({ params: () => this.pairingId(), stream: ({ params }) => this.api.get<Pairing>(`/pairings/${params}`) });
   protected readonly outcomes = rxResource({ params: () => this.pairingId(), stream: ({ params }) => this.api.get<PairingOutcomesView>(`/pairings/${params}/outcomes`) });
   protected readonly clutches = rxResource({
@@ -81,6 +84,14 @@ export class PairingDetail {
     return Object.entries(chances)
       .map(([trait, p]) => `${formatPercent(p)} het ${trait}`)
       .join(', ');
+  }
+
+  protected recordHatch(clutch: Clutch, p: Pairing): void {
+    openHatchDialog(this.injector, clutch, `${p.sire.code} × ${p.dam.code}`).subscribe((result) => {
+      this.clutches.reload();
+      if (result?.hatch) this.clutchNotice.set(`Hatch recorded: ${result.hatch.hatchlings.map((h) => h.code).join(', ')}.`);
+      if (result?.open) this.navigate(result.open);
+    });
   }
 
   protected setStatus(status: PairingStatus): void {

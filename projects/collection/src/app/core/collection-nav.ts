@@ -8,7 +8,9 @@ const ENTRIES: { section: Section; path: string; label: string; icon: string }[]
   { section: 'racks', path: 'racks', label: 'Racks', icon: 'shelves' },
   { section: 'feeding', path: 'feeding', label: 'Feeding day', icon: 'restaurant' },
   { section: 'breeding', path: 'breeding', label: 'Breeding', icon: 'egg' },
+  { section: 'traits', path: 'traits', label: 'Traits', icon: 'genetics' },
   { section: 'environment', path: 'environment', label: 'Environment', icon: 'thermostat' },
+  { section: 'species', path: 'species', label: 'Species', icon: 'menu_book' },
 ];
 
 /** The module's own sections, as links (the shell's address bar follows). */

@@ -25,6 +25,16 @@ describe('parseCollectionPath', () => {
     expect(parseCollectionPath('racks/3/other')).toEqual({ page: 'missing', route: 'racks/3/other' });
   });
 
+  it('opens the animal form, the CSV import, the trait list and the species page', () => {
+    expect(parseCollectionPath('animals/new')).toEqual({ page: 'animal-new' });
+    expect(parseCollectionPath('animals/42/edit')).toEqual({ page: 'animal-edit', id: 42 });
+    expect(parseCollectionPath('animals/import')).toEqual({ page: 'import' });
+    expect(parseCollectionPath('traits')).toEqual({ page: 'traits' });
+    expect(parseCollectionPath('species')).toEqual({ page: 'species' });
+    expect(parseCollectionPath('animals/new/edit')).toEqual({ page: 'missing', route: 'animals/new/edit' });
+    expect(parseCollectionPath('traits/3')).toEqual({ page: 'missing', route: 'traits/3' });
+  });
+
   it('keeps the due list date and the environment rack from the query', () => {
     expect(parseCollectionPath('feeding?date=2026-12-02')).toEqual({ page: 'due', date: '2026-12-02' });
     expect(parseCollectionPath('feeding?date=tomorrow')).toEqual({ page: 'due', date: null });
@@ -36,6 +46,9 @@ describe('parseCollectionPath', () => {
     expect(sectionOf(parseCollectionPath('animals/4'))).toBe('animals');
     expect(sectionOf(parseCollectionPath('feeding/4'))).toBe('feeding');
     expect(sectionOf(parseCollectionPath('racks/4/labels'))).toBe('racks');
+    expect(sectionOf(parseCollectionPath('animals/4/edit'))).toBe('animals');
+    expect(sectionOf(parseCollectionPath('animals/import'))).toBe('animals');
+    expect(sectionOf(parseCollectionPath('species'))).toBe('species');
     expect(sectionOf(parseCollectionPath('nowhere'))).toBeNull();
   });
 });

@@ -3,7 +3,10 @@ import { ListDefaults, ListQuery, parseListPath, toListPath } from '@tubwright/k
 /*
  * The module's pages as sub-paths the shell passes in `path` (the shell owns the address bar):
  *   '' | animals[?q&sort&status&sex…]   animal list
+ *   animals/new                          add an animal
+ *   animals/import                       import animals from CSV, with a preview
  *   animals/42                           one animal with its history
+ *   animals/42/edit                      change an animal's record
  *   racks                                racks and empty tubs
  *   racks/3                              a rack's map of tubs
  *   racks/3/labels                       printable tub labels
@@ -12,6 +15,8 @@ import { ListDefaults, ListQuery, parseListPath, toListPath } from '@tubwright/k
  *   breeding                             pairings and clutches
  *   breeding/pairings/5                  one pairing: outcomes and clutches
  *   environment[?rackId=3]               temperature and humidity readings
+ *   traits                               the shop's trait list
+ *   species                              species of the collection with their husbandry ranges
  */
 
 export const ANIMAL_STATUSES = ['active', 'on-hold', 'sold', 'deceased'] as const;
@@ -29,6 +34,9 @@ export const ANIMAL_LIST_DEFAULTS: ListDefaults = { sort: 'code', limit: 25 };
 export type CollectionView =
   | { page: 'animals'; query: ListQuery; filters: AnimalFilters }
   | { page: 'animal'; id: number }
+  | { page: 'animal-new' }
+  | { page: 'animal-edit'; id: number }
+  | { page: 'import' }
   | { page: 'racks' }
   | { page: 'rack'; id: number }
   | { page: 'labels'; id: number }
@@ -37,9 +45,11 @@ export type CollectionView =
   | { page: 'breeding' }
   | { page: 'pairing'; id: number }
   | { page: 'environment'; rackId: number | null }
+  | { page: 'traits' }
+  | { page: 'species' }
   | { page: 'missing'; route: string };
 
-export type Section = 'animals' | 'racks' | 'feeding' | 'breeding' | 'environment';
+export type Section = 'animals' | 'racks' | 'feeding' | 'breeding' | 'traits' | 'environment' | 'species';
 
 export function parseCollectionPath(path: string | null | undefined): CollectionView {
   const raw = (path ?? '').trim();
@@ -52,7 +62,10 @@ export function parseCollectionPath(path: string | null | undefined): Collection
   if (parts.length <= 1 && (first === '' || first === 'animals')) {
     return { page: 'animals', query, filters: readFilters(params) };
   }
+  if (first === 'animals' && parts.length === 2 && second === 'new') return { page: 'animal-new' };
+  if (first === 'animals' && parts.length === 2 && second === 'import') return { page: 'import' };
   if (first === 'animals' && parts.length === 2 && id(second)) return { page: 'animal', id: id(second)! };
+  if (first === 'animals' && parts.length === 3 && id(second) && third === 'edit') return { page: 'animal-edit', id: id(second)! };
   if (first === 'racks') {
     if (parts.length === 1) return { page: 'racks' };
     if (parts.length === 2 && id(second)) return { page: 'rack', id: id(second)! };
@@ -70,6 +83,8 @@ export function parseCollectionPath(path: string | null | undefined): Collection
     if (parts.length === 3 && second === 'pairings' && id(third) && !fourth) return { page: 'pairing', id: id(third)! };
   }
   if (first === 'environment' && parts.length === 1) return { page: 'environment', rackId: id(params.get('rackId') ?? undefined) };
+  if (first === 'traits' && parts.length === 1) return { page: 'traits' };
+  if (first === 'species' && parts.length === 1) return { page: 'species' };
   return { page: 'missing', route };
 }
 
@@ -89,6 +104,9 @@ export function sectionOf(view: CollectionView): Section | null {
   switch (view.page) {
     case 'animals':
     case 'animal':
+    case 'animal-new':
+    case 'animal-edit':
+    case 'import':
       return 'animals';
     case 'racks':
     case 'rack':
@@ -102,6 +120,10 @@ export function sectionOf(view: CollectionView): Section | null {
       return 'breeding';
     case 'environment':
       return 'environment';
+    case 'traits':
+      return 'traits';
+    case 'species':
+      return 'species';
     default:
       return null;
   }

@@ -3,6 +3,7 @@ import type * as animals from '@tubwright/shared/api/collection-animals';
 import type * as breeding from '@tubwright/shared/api/collection-breeding';
 import type * as environment from '@tubwright/shared/api/collection-environment';
 import type * as genetics from '@tubwright/shared/api/genetics';
+import type * as plans from '@tubwright/shared/api/plans';
 import type * as husbandry from '@tubwright/shared/api/collection-husbandry';
 import type * as racks from '@tubwright/shared/api/collection-racks';
 import type * as schedules from '@tubwright/shared/api/collection-schedules';
@@ -15,6 +16,10 @@ import type * as schedules from '@tubwright/shared/api/collection-schedules';
 export type AnimalProfile = z.infer<typeof animals.AnimalProfile>;
 export type AnimalPhoto = z.infer<typeof animals.AnimalPhoto>;
 export type AnimalPhotoList = z.infer<typeof animals.AnimalPhotoList>;
+export type AnimalOrigin = AnimalProfile['origin'];
+export type UpdateProfileRequest = z.input<typeof animals.UpdateProfileRequest>;
+export type ImportPreview = z.infer<typeof animals.ImportPreview>;
+export type ImportResult = z.infer<typeof animals.ImportResult>;
 
 export type Rack = z.infer<typeof racks.Rack>;
 export type RackMap = z.infer<typeof racks.RackMap>;
@@ -46,11 +51,21 @@ export type ObservationKind = z.infer<typeof breeding.PairingObservation>['kind'
 export type Clutch = z.infer<typeof breeding.Clutch>;
 export type PairingOutcomesView = z.infer<typeof breeding.PairingOutcomesView>;
 export type PairingOutcomes = z.infer<typeof genetics.PairingOutcomesResponse>;
+export type AppearanceOutcome = z.infer<typeof genetics.AppearanceOutcome>;
+export type LooksState = genetics.LooksState;
+export type InheritanceMode = genetics.InheritanceMode;
+export type HatchRequest = z.input<typeof breeding.HatchRequest>;
+export type HatchResponse = z.infer<typeof breeding.HatchResponse>;
 
 export type EnvironmentReading = z.infer<typeof environment.EnvironmentReading>;
 export type EnvironmentReadingPage = z.infer<typeof environment.EnvironmentReadingPage>;
 export type RangeSet = z.infer<typeof environment.RangeSet>;
 export type Probe = EnvironmentReading['probe'];
+export type Species = z.infer<typeof environment.Species>;
+export type SpeciesList = z.infer<typeof environment.SpeciesList>;
+
+/** What the rack form reads of a saved plan (GET /plans, owner, builder and sales). */
+export type PlanListItem = z.infer<typeof plans.PlanListItem>;
 
 /** `{ items, total }` lists that are not paged. */
 export interface ItemList<T> {

@@ -1,19 +1,18 @@
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButton } from '@angular/material/button';
-import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
-import { MatInput } from '@angular/material/input';
 import { ErrorBanner, Page, PageHeader, describeApiError, injectShellNavigate } from '@tubwright/kit';
 import { CollectionApi } from '../core/collection-api';
-import type { EmptyTubList, Rack, RackMap } from '../core/collection-types';
+import type { EmptyTubList, Rack } from '../core/collection-types';
 import { ShellLink } from '../core/shell-link';
+import { RackForm } from './rack-form';
 
-/** Installed racks with how full they are, the empty tubs, and a form to add a rack by hand. */
+/** Installed racks with how full they are, the empty tubs, and a form to add a rack. */
 @Component({
   selector: 'tw-rack-list',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [MatButton, MatIcon, MatFormFieldModule, MatInput, ErrorBanner, PageHeader, ShellLink],
+  imports: [MatButton, MatIcon, ErrorBanner, PageHeader, ShellLink, RackForm],
   template: `
     <tw-page-header heading="Racks" subheading="Every installed rack, its tubs and who lives in them.">
       <button mat-stroked-button type="button" (click)="adding.set(!adding())" [attr.aria-expanded]="adding()">
@@ -23,28 +22,11 @@ import { ShellLink } from '../core/shell-link';
 
     @if (adding()) {
       <section class="card" aria-labelledby="add-rack-heading">
-        <h2 id="add-rack-heading">Add a rack by hand</h2>
-        <form class="form-row" (submit)="$event.preventDefault(); create()">
-          <mat-form-field appearance="outline" subscriptSizing="dynamic">
-            <mat-label>Name (used on tub labels)</mat-label>
-            <input matInput [value]="name()" (input)="name.set($any($event.target).value)" maxlength="20" required />
-          </mat-form-field>
-          <mat-form-field appearance="outline" subscriptSizing="dynamic" class="narrow">
-            <mat-label>Levels</mat-label>
-            <input matInput type="number" min="1" max="30" [value]="levels()" (input)="levels.set(+$any($event.target).value)" required />
-          </mat-form-field>
-          <mat-form-field appearance="outline" subscriptSizing="dynamic" class="narrow">
-            <mat-label>Tubs per level</mat-label>
-            <input matInput type="number" min="1" max="12" [value]="columns()" (input)="columns.set(+$any($event.target).value)" required />
-          </mat-form-field>
-          <mat-form-field appearance="outline" subscriptSizing="dynamic">
-            <mat-label>Where it stands</mat-label>
-            <input matInput [value]="location()" (input)="location.set($any($event.target).value)" maxlength="80" />
-          </mat-form-field>
-          <button mat-flat-button type="submit" [disabled]="saving()">Build {{ levels() * columns() || 0 }} tubs</button>
-        </form>
-        @if (createError(); as message) {
-          <tw-error-banner [message]="message" />
+        <h2 id="add-rack-heading">Add a rack</h2>
+        @defer {
+          <tw-rack-form (created)="navigate('racks/' + $event.id)" />
+        } @placeholder {
+          <p class="muted" role="status">Loading…</p>
         }
       </section>
     }
@@ -108,7 +90,6 @@ import { ShellLink } from '../core/shell-link';
     .fill { height: 8px; border-radius: 4px; background: var(--mat-sys-surface-container-high); overflow: hidden; }
     .fill span { display: block; height: 100%; background: var(--mat-sys-tertiary); }
     .actions { display: flex; flex-wrap: wrap; gap: 4px; margin: 4px -8px 0; }
-    .narrow { flex: 0 1 130px !important; }
     .empty-row { display: flex; flex-wrap: wrap; align-items: center; gap: 6px; margin: 0 0 8px; }
     .tub-chip { padding: 2px 8px; border-radius: 6px; border: 1px dashed var(--mat-sys-outline); color: var(--mat-sys-on-surface); text-decoration: none; font-variant-numeric: tabular-nums; }
     .tub-chip:hover, .tub-chip:focus-visible { background: var(--mat-sys-surface-container); }
@@ -116,7 +97,7 @@ import { ShellLink } from '../core/shell-link';
 })
 export class RackList {
   private readonly api = inject(CollectionApi);
-  private readonly navigate = injectShellNavigate();
+  protected readonly navigate = injectShellNavigate();
 
   protected readonly racks = rxResource({ stream: () => this.api.get<Page<Rack>>('/racks', { limit: 200, sort: 'name' }) });
   protected readonly empty = rxResource({ stream: () => this.api.get<EmptyTubList>('/tubs/empty') });
@@ -127,27 +108,5 @@ export class RackList {
   });
 
   protected readonly adding = signal(false);
-  protected readonly name = signal('');
-  protected readonly levels = signal(5);
-  protected readonly columns = signal(3);
-  protected readonly location = signal('');
-  protected readonly saving = signal(false);
-  protected readonly createError = signal<string | null>(null);
   protected readonly errorText = (error: unknown) => describeApiError(error);
-
-  protected create(): void {
-    this.saving.set(true);
-    this.createError.set(null);
-    const body = { name: this.name().trim(), levels: this.levels(), columns: this.columns(), location: this.location().trim() };
-    this.api.post<RackMap>('/racks', body).subscribe({
-      next: (rack) => {
-        this.saving.set(false);
-        this.navigate(`racks/${rack.id}`);
-      },
-      error: (error: unknown) => {
-        this.saving.set(false);
-        this.createError.set(describeApiError(error));
-      },
-    });
-  }
 }

@@ -31,6 +31,10 @@ export class OrdersApi {
     return this.http.patch<T>(API_BASE + path, body).pipe(catchError(rethrow));
   }
 
+  delete(path: string): Observable<void> {
+    return this.http.delete<void>(API_BASE + path).pipe(catchError(rethrow));
+  }
+
   blob(path: string): Observable<Blob> {
     return this.http.get(API_BASE + path, { responseType: 'blob' }).pipe(catchError(rethrow));
   }

@@ -29,6 +29,16 @@ describe('parseOrdersPath', () => {
     expect(parseOrdersPath('cutting')).toEqual({ page: 'cutting', orderIds: [] });
   });
 
+  it('reads the stock pages', () => {
+    expect(parseOrdersPath('stock')).toEqual({ page: 'stock', kind: null });
+    expect(parseOrdersPath('stock?kind=board')).toEqual({ page: 'stock', kind: 'board' });
+    expect(parseOrdersPath('stock?kind=lumber')).toEqual({ page: 'stock', kind: null });
+    expect(parseOrdersPath('stock/new?kind=sheet&offcut=1')).toEqual({ page: 'stock-item', id: null, kind: 'sheet', offcut: true });
+    expect(parseOrdersPath('stock/9')).toEqual({ page: 'stock-item', id: 9, kind: null, offcut: false });
+    expect(parseOrdersPath('stock/9/edit')).toEqual({ page: 'missing', route: 'stock/9/edit' });
+    expect(sectionOf(parseOrdersPath('stock/9'))).toBe('stock');
+  });
+
   it('refuses paths that are not pages', () => {
     expect(parseOrdersPath('customers/0')).toEqual({ page: 'missing', route: 'customers/0' });
     expect(parseOrdersPath('orders/5/edit')).toEqual({ page: 'missing', route: 'orders/5/edit' });
@@ -44,7 +54,8 @@ describe('sections', () => {
   });
 
   it('shows each role only what the API lets it do', () => {
-    expect(sectionsFor('builder')).toEqual(['production', 'cutting', 'orders']);
+    expect(sectionsFor('builder')).toEqual(['production', 'cutting', 'stock', 'orders']);
+    expect(sectionsFor('sales')).toContain('stock');
     expect(sectionsFor('sales')).not.toContain('cutting');
     expect(sectionsFor('keeper')).toEqual([]);
   });

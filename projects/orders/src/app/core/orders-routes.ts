@@ -1,6 +1,7 @@
 import { ListDefaults, ListQuery, Role, parseListPath, toListPath } from '@tubwright/kit';
-import type { OrderStatus, QuoteStatus } from './orders-types';
+import type { OrderStatus, QuoteStatus, StockKind } from './orders-types';
 import { ORDER_STATUSES, QUOTE_STATUSES } from './statuses';
+import { STOCK_KINDS } from './stock-materials';
 
 /*
  * The module's pages as sub-paths the shell passes in `path` (the shell owns the address bar):
@@ -16,10 +17,13 @@ import { ORDER_STATUSES, QUOTE_STATUSES } from './statuses';
  *   orders/5                       one order: stages, payments, invoice, doorway check
  *   production                     the production board
  *   cutting[?orders=5,6]           batch cutting plan for several orders
+ *   stock[?kind=sheet]             sheets, boards and hardware on hand, set aside and free
+ *   stock/new[?kind=sheet&offcut=1] add stock (or record an offcut)
+ *   stock/9                        one stock item: change it, what is set aside, remove it
  *   settings                       tax, deposit, delivery fee, validity
  */
 
-export type Section = 'customers' | 'quotes' | 'orders' | 'production' | 'cutting' | 'settings';
+export type Section = 'customers' | 'quotes' | 'orders' | 'production' | 'cutting' | 'stock' | 'settings';
 
 export type OrdersView =
   | { page: 'customers'; query: ListQuery }
@@ -32,6 +36,8 @@ export type OrdersView =
   | { page: 'order'; id: number }
   | { page: 'production' }
   | { page: 'cutting'; orderIds: number[] }
+  | { page: 'stock'; kind: StockKind | null }
+  | { page: 'stock-item'; id: number | null; kind: StockKind | null; offcut: boolean }
   | { page: 'settings' }
   | { page: 'missing'; route: string };
 
@@ -41,9 +47,9 @@ export const ORDER_LIST_DEFAULTS: ListDefaults = { sort: '-createdAt', limit: 25
 
 /** Which sections each role sees, in navigation order; the API enforces the same. */
 const ACCESS: Record<Role, readonly Section[]> = {
-  owner: ['customers', 'quotes', 'orders', 'production', 'cutting', 'settings'],
-  sales: ['customers', 'quotes', 'orders', 'production', 'settings'],
-  builder: ['production', 'cutting', 'orders'],
+  owner: ['customers', 'quotes', 'orders', 'production', 'cutting', 'stock', 'settings'],
+  sales: ['customers', 'quotes', 'orders', 'production', 'stock', 'settings'],
+  builder: ['production', 'cutting', 'stock', 'orders'],
   keeper: [],
 };
 
@@ -87,6 +93,12 @@ export function parseOrdersPath(path: string, role: Role | null = null): OrdersV
     case 'cutting':
       if (parts.length !== 1) return missing;
       return { page: 'cutting', orderIds: (params.get('orders') ?? '').split(',').map(toId).filter((n): n is number => n !== null) };
+    case 'stock': {
+      const kind = oneOf(params.get('kind'), STOCK_KINDS);
+      if (parts.length === 1) return { page: 'stock', kind };
+      if (second === 'new' && parts.length === 2) return { page: 'stock-item', id: null, kind, offcut: params.get('offcut') === '1' };
+      return id !== null && parts.length === 2 ? { page: 'stock-item', id, kind: null, offcut: false } : missing;
+    }
     case 'settings':
       return parts.length === 1 ? { page: 'settings' } : missing;
     default:
@@ -108,6 +120,9 @@ export function sectionOf(view: OrdersView): Section | null {
     case 'orders':
     case 'order':
       return 'orders';
+    case 'stock':
+    case 'stock-item':
+      return 'stock';
     case 'missing':
       return null;
     default:

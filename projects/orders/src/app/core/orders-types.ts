@@ -15,9 +15,11 @@ import type {
   Quote as QuoteSchema,
   QuoteLine as QuoteLineSchema,
   QuoteSummary as QuoteSummarySchema,
+  Refund as RefundSchema,
 } from '@tubwright/shared/api/orders';
 import type { Plan as PlanSchema, PlanListItem as PlanListItemSchema, PriceListItem as PriceListItemSchema } from '@tubwright/shared/api/plans';
 import type { RackPlanRequestInput, RackPlanResponse } from '@tubwright/shared/api/rack-plan';
+import type { StockItem as StockItemSchema, StockReservation as StockReservationSchema } from '@tubwright/shared/api/stock';
 
 // Types only: importing the schemas' values would put zod into the bundle.
 export type { CuttingPlanRequestInput, CuttingPlanResponse, OrderSettings, OrderStatus, RackPlanRequestInput, RackPlanResponse };
@@ -31,6 +33,10 @@ export type Order = z.output<typeof OrderSchema>;
 export type OrderRack = z.output<typeof OrderRackSchema>;
 export type OrderStage = z.output<typeof OrderStageSchema>;
 export type Payment = z.output<typeof PaymentSchema>;
+export type Refund = z.output<typeof RefundSchema>;
+export type StockItem = z.output<typeof StockItemSchema>;
+export type StockKind = StockItem['kind'];
+export type StockReservation = z.output<typeof StockReservationSchema>;
 export type Invoice = z.output<typeof InvoiceSchema>;
 export type InvoiceDetail = z.output<typeof InvoiceDetailSchema>;
 export type MailLogEntry = z.output<typeof MailLogEntrySchema>;

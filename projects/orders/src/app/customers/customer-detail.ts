@@ -8,10 +8,11 @@ import { forkJoin, map, of } from 'rxjs';
 import { MoneyPipe } from '../core/money';
 import { OrdersApi } from '../core/orders-api';
 import type { MailLogEntry, OrderSummary, Payment, QuoteSummary } from '../core/orders-types';
+import { paymentStatusLabel, viaLabel } from '../core/payment-labels';
 import { remote } from '../core/remote';
 import { ShellLink } from '../core/shell-link';
 import { StatusChip } from '../core/status-chip';
-import { Customer, placeOf } from './customer';
+import { Customer, placeOf, sourceLabel } from './customer';
 
 type PaymentRow = Payment & { orderNumber: string };
 
@@ -59,9 +60,9 @@ export class CustomerDetail {
     () => this.customer.error() ?? this.quotes.error() ?? this.orders.error() ?? this.payments.error() ?? this.mail.error(),
   );
 
-  protected paymentLabel(payment: Payment): string {
-    return payment.status === 'succeeded' ? 'Paid' : payment.status.charAt(0).toUpperCase() + payment.status.slice(1);
-  }
+  protected readonly sourceLabel = sourceLabel;
+  protected readonly viaLabel = viaLabel;
+  protected readonly paymentLabel = paymentStatusLabel;
 
   protected mailKind(kind: string): string {
     const words = kind.replace(/_/g, ' ');

@@ -9,9 +9,11 @@ import { EMAIL, FieldCheck, required } from '../core/field-check';
 import { OrdersApi } from '../core/orders-api';
 import { Action, remote } from '../core/remote';
 import { ShellLink } from '../core/shell-link';
-import { Customer } from './customer';
+import { CUSTOMER_SOURCES, Customer, SOURCE_LABELS } from './customer';
 
-type Field = 'name' | 'email' | 'phone' | 'city' | 'region' | 'notes';
+type Field = 'name' | 'email' | 'phone' | 'city' | 'region' | 'address' | 'source' | 'notes';
+/** Fields typed as several lines. */
+const MULTI_LINE: readonly Field[] = ['address', 'notes'];
 
 /** Adds a customer or changes one; the server's complaints land on the field they concern. */
 @Component({
@@ -30,10 +32,24 @@ type Field = 'name' | 'email' | 'phone' | 'city' | 'region' | 'notes';
     <form class="tw-card" (submit)="$event.preventDefault(); submit()" novalidate aria-label="Customer">
       <div class="tw-fields">
         @for (f of textFields; track f.field) {
-          <mat-form-field appearance="outline" subscriptSizing="dynamic" [class.tw-invalid]="check.problem(f.field)" [class.tw-wide]="f.field === 'notes'">
+          <mat-form-field appearance="outline" subscriptSizing="dynamic" [class.tw-invalid]="check.problem(f.field)" [class.tw-wide]="multiLine(f.field)">
             <mat-label>{{ f.label }}</mat-label>
-            @if (f.field === 'notes') {
-              <textarea matInput rows="3" [attr.maxlength]="f.max" [value]="values[f.field]()" (input)="set(f.field, $event)"></textarea>
+            @if (f.field === 'source') {
+              <select matNativeControl (change)="set(f.field, $event)" [attr.aria-invalid]="!!check.problem(f.field)">
+                @for (s of sources; track s) {
+                  <option [value]="s" [selected]="values.source() === s">{{ sourceLabels[s] }}</option>
+                }
+              </select>
+            } @else if (multiLine(f.field)) {
+              <textarea
+                matInput
+                rows="3"
+                [attr.maxlength]="f.max"
+                [value]="values[f.field]()"
+                (input)="set(f.field, $event)"
+                [attr.aria-invalid]="!!check.problem(f.field)"
+                [attr.autocomplete]="f.field === 'address' ? 'street-address' : 'off'"
+              ></textarea>
             } @else {
               <input
                 matInput
@@ -74,6 +90,8 @@ export class CustomerForm {
     phone: signal(''),
     city: signal(''),
     region: signal(''),
+    address: signal(''),
+    source: signal('walk-in'),
     notes: signal(''),
   };
   protected readonly textFields: Array<{ field: Field; label: string; type: string; max: number; required: boolean; hint: string }> = [
@@ -82,7 +100,9 @@ export class CustomerForm {
     { field: 'phone', label: 'Phone', type: 'tel', max: 40, required: false, hint: '' },
     { field: 'city', label: 'City', type: 'text', max: 120, required: false, hint: '' },
     { field: 'region', label: 'State or region', type: 'text', max: 120, required: false, hint: '' },
-    { field: 'notes', label: 'Notes', type: 'text', max: 4000, required: false, hint: 'Where they heard of the shop, doorway or stair limits, colour wishes' },
+    { field: 'source', label: 'How they found the shop', type: 'text', max: 40, required: false, hint: '' },
+    { field: 'address', label: 'Address', type: 'text', max: 500, required: false, hint: 'Street, town and postcode, for delivery and invoices' },
+    { field: 'notes', label: 'Notes', type: 'text', max: 4000, required: false, hint: 'Doorway or stair limits, colour wishes' },
   ];
   private readonly none = computed(() => null);
   protected readonly check = new FieldCheck<Field>({
@@ -91,8 +111,13 @@ export class CustomerForm {
     phone: this.none,
     city: this.none,
     region: this.none,
+    address: this.none,
+    source: this.none,
     notes: this.none,
   });
+  protected readonly sources = CUSTOMER_SOURCES;
+  protected readonly sourceLabels = SOURCE_LABELS;
+  protected readonly multiLine = (field: Field) => MULTI_LINE.includes(field);
 
   constructor() {
     effect(() => {
@@ -113,7 +138,10 @@ export class CustomerForm {
 
   protected submit(): void {
     if (!this.check.ready()) return;
-    const body = Object.fromEntries((Object.keys(this.values) as Field[]).map((f) => [f, f === 'notes' ? this.values[f]() : this.values[f]().trim()]));
+    // Notes keep the person's spacing; the address keeps its lines but not stray blanks around them.
+    const body = Object.fromEntries(
+      (Object.keys(this.values) as Field[]).map((f) => [f, f === 'notes' ? this.values[f]() : f === 'address' ? tidyLines(this.values[f]()) : this.values[f]().trim()]),
+    );
     const id = this.id();
     const request = id ? this.api.patch<Customer>(`/customers/${id}`, body) : this.api.post<Customer>('/customers', body);
     this.save.run(
@@ -122,4 +150,13 @@ export class CustomerForm {
       (error) => this.check.placeServerError(error),
     );
   }
+}
+
+/** Lines trimmed, blank lines dropped: `  12 Elm St \n\n Fresno ` → `12 Elm St\nFresno`. */
+export function tidyLines(text: string): string {
+  return text
+    .split(/\r?\n/)
+    .map((line) => line.trim())
+    .filter(Boolean)
+    .join('\n');
 }

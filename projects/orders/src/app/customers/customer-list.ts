@@ -6,7 +6,7 @@ import { MatSortModule, Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
 import { ApiClient, DataTable, ListQuery, PageHeader, fromSortParam, pagedList, toSortParam } from '@tubwright/kit';
 import { ShellLink } from '../core/shell-link';
-import { Customer, placeOf } from './customer';
+import { Customer, placeOf, sourceLabel } from './customer';
 
 /** People and shops who buy racks: who they are and how to reach them. */
 @Component({
@@ -23,8 +23,14 @@ export class CustomerList {
   private readonly api = inject(ApiClient);
   protected readonly list = pagedList(this.query, (q) => this.api.list<Customer>('/customers', q));
   protected readonly sort = computed(() => fromSortParam(this.query().sort));
-  protected readonly columns = ['name', 'email', 'phone', 'city', 'createdAt'];
+  protected readonly columns = ['name', 'email', 'phone', 'city', 'source', 'createdAt'];
   protected readonly placeOf = placeOf;
+  protected readonly sourceLabel = sourceLabel;
+
+  /** A several-line address on one line, as the list has room for. */
+  protected oneLine(address: string): string {
+    return address.split(/\s*\n\s*/).filter(Boolean).join(', ');
+  }
 
   protected sortBy(sort: Sort): void {
     this.queryChange.emit({ ...this.query(), sort: toSortParam(sort.active, sort.direction), offset: 0 });

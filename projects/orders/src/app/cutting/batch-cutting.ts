@@ -10,13 +10,22 @@ import { RackResults } from '../core/rack-results';
 import { Action, remote } from '../core/remote';
 import { ShellLink } from '../core/shell-link';
 import { statusLabel } from '../core/statuses';
+import { materialName } from '../core/stock-materials';
+import { StockApi } from '../stock/stock-api';
 import { BatchRack, batchCuttingRequest, pieceCount, separateSheetCounts } from './calculations/batch-request';
+import { MaterialUse, StockLine, StockSource, heldOutside, stockUse, withStockOnHand } from './calculations/stock-use';
 
 interface BatchResult {
   request: CuttingPlanRequestInput;
   plan: CuttingPlanResponse;
   separate: Map<string, number>;
   orders: Order[];
+  /** Per material: offcuts, stock on hand and pieces to buy. */
+  use: Map<string, MaterialUse>;
+  pull: StockLine[];
+  buy: StockLine[];
+  notes: string[];
+  sources: StockSource[];
 }
 
 /** Nests the parts of several orders onto shared sheets and boards through the cutting-plan API. */
@@ -33,6 +42,7 @@ export class BatchCutting {
 
   private readonly api = inject(OrdersApi);
   private readonly racks = inject(RackResults);
+  private readonly stock = inject(StockApi);
   protected readonly candidates = remote(
     () => true,
     () =>
@@ -51,28 +61,20 @@ export class BatchCutting {
     if (!r) return [];
     let drawing = 0;
     return r.plan.materials.flatMap((m) =>
-      m.layouts.map((layout, i) => ({
-        material: materialName(m.material),
-        index: i + 1,
-        of: m.layouts.length,
-        count: layout.count,
-        pieces: layout.placements.length,
-        src: svgSource(r.plan.svg[drawing++] ?? ''),
-      })),
+      m.layouts.map((layout, i) => {
+        const stock = r.request.stock[layout.stock];
+        const size = !stock ? '' : stock.kind === 'sheet' ? `${formatLength(stock.length).replace(/ in$/, '')} x ${formatLength(stock.width)}` : formatLength(stock.length);
+        return {
+          material: materialName(m.material),
+          index: i + 1,
+          of: m.layouts.length,
+          count: layout.count,
+          pieces: layout.placements.length,
+          from: r.sources[layout.stock]?.from === 'offcut' ? `offcut ${size}` : size,
+          src: svgSource(r.plan.svg[drawing++] ?? ''),
+        };
+      }),
     );
-  });
-
-  /** Stock pieces to buy, by size: sheets and boards as a shopping list. */
-  protected readonly shopping = computed(() => {
-    const r = this.result();
-    if (!r) return [];
-    const counts = new Map<number, number>();
-    for (const m of r.plan.materials) for (const l of m.layouts) counts.set(l.stock, (counts.get(l.stock) ?? 0) + l.count);
-    return [...counts.entries()].map(([index, count]) => {
-      const stock = r.request.stock[index]!;
-      const size = stock.kind === 'sheet' ? `${formatLength(stock.length)} x ${formatLength(stock.width)}` : formatLength(stock.length);
-      return { count, text: `${materialName(stock.material)}, ${size}` };
-    });
   });
 
   protected toggle(id: number, event: Event): void {
@@ -90,23 +92,42 @@ export class BatchCutting {
     if (ids.length === 0) return;
     this.result.set(null);
     this.step.set('Reading the orders…');
-    const work = forkJoin(ids.map((id) => this.api.get<Order>(`/orders/${id}`))).pipe(
+    const work = forkJoin({
+      orders: forkJoin(ids.map((id) => this.api.get<Order>(`/orders/${id}`))),
+      items: this.stock.items(),
+      holds: this.stock.reservations(),
+    }).pipe(
       tap(() => this.step.set('Working out every rack’s parts…')),
-      switchMap((orders) => {
+      switchMap(({ orders, items, holds }) => {
         const racks = orders.flatMap((order) => order.racks.filter((r) => r.spec).map((rack) => ({ order, rack })));
         if (racks.length === 0) throw new Error('None of these orders has a rack to cut.');
         return forkJoin(racks.map(({ rack }) => this.racks.resultFor(rack.spec!, true))).pipe(
-          map((results) => ({
-            orders,
-            batch: results.map((result, i): BatchRack => ({ source: racks[i]!.order.number, quantity: racks[i]!.rack.quantity, spec: racks[i]!.rack.spec!, result })),
-          })),
+          map((results) => {
+            const batch = results.map((result, i): BatchRack => ({ source: racks[i]!.order.number, quantity: racks[i]!.rack.quantity, spec: racks[i]!.rack.spec!, result }));
+            // What the batch's own orders hold is theirs to cut; what other orders hold stays put.
+            return { orders, batch, withStock: withStockOnHand(batchCuttingRequest(batch), items, heldOutside(holds, ids)) };
+          }),
         );
       }),
-      tap(() => this.step.set('Nesting the parts onto sheets and boards…')),
-      switchMap(({ orders, batch }) => {
-        const request = batchCuttingRequest(batch);
-        return this.api.post<CuttingPlanResponse>('/calc/cutting-plan', request).pipe(map((plan) => ({ request, plan, orders, separate: separateSheetCounts(batch) })));
-      }),
+      tap(() => this.step.set('Nesting the parts onto offcuts, sheets and boards…')),
+      switchMap(({ orders, batch, withStock }) =>
+        this.api.post<CuttingPlanResponse>('/calc/cutting-plan', withStock.request).pipe(
+          map((plan): BatchResult => {
+            const use = stockUse(withStock, plan);
+            return {
+              request: withStock.request,
+              plan,
+              orders,
+              separate: separateSheetCounts(batch),
+              use: new Map(use.materials.map((m) => [m.material, m])),
+              pull: use.pull,
+              buy: use.buy,
+              notes: withStock.notes,
+              sources: withStock.sources,
+            };
+          }),
+        ),
+      ),
     );
     this.run.run(
       work,
@@ -138,12 +159,6 @@ export class BatchCutting {
   protected percent(fraction: number): string {
     return `${Math.round(fraction * 1000) / 10} %`;
   }
-}
-
-/** `pvc-rigid@0.5` → `pvc-rigid, 1/2 in`; `lumber-2x4` stays as it is. */
-function materialName(key: string): string {
-  const [material, thickness] = key.split('@');
-  return thickness ? `${material}, ${formatLength(Number(thickness))}` : key;
 }
 
 function svgSource(svg: string): string {

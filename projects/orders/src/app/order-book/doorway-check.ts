@@ -1,27 +1,19 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
-import { MatFormFieldModule } from '@angular/material/form-field';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { MatIcon } from '@angular/material/icon';
-import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { ErrorBanner, LengthPipe } from '@tubwright/kit';
-import { parseInches } from '@tubwright/shared/units';
 import { forkJoin, of } from 'rxjs';
 import type { OrderRack, RackCheckItem, RackPlanResponse } from '../core/orders-types';
 import { RackResults } from '../core/rack-results';
 import { remote } from '../core/remote';
 import { checkDoorway } from './calculations/doorway';
 
-/** Before delivery: does every rack of the order pass the customer's doorway, section by section? */
+/** Before delivery: does every rack of the order pass the customer's doorway (as stored on the order), section by section? */
 @Component({
   selector: 'tw-doorway-check',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [MatFormFieldModule, MatInput, MatIcon, MatProgressBar, ErrorBanner, LengthPipe],
+  imports: [MatIcon, MatProgressBar, ErrorBanner, LengthPipe],
   template: `
-    <mat-form-field appearance="outline" class="doorway" subscriptSizing="dynamic">
-      <mat-label>Customer’s doorway height (in)</mat-label>
-      <input matInput inputmode="decimal" [value]="doorwayText()" (input)="doorwayText.set(value($event))" placeholder="80" />
-      <mat-hint>{{ doorwayProblem() ?? 'Empty: the plan’s own clearance, 80 in by default' }}</mat-hint>
-    </mat-form-field>
     @if (results.loading()) {
       <mat-progress-bar mode="indeterminate" aria-label="Checking the racks" />
     }
@@ -42,7 +34,7 @@ import { checkDoorway } from './calculations/doorway';
             } @else {
               {{ row.check.sections }} sections, the tallest {{ row.check.tallestSectionIn | length }},
             }
-            through a {{ row.check.doorwayIn | length }} doorway
+            through a doorway of {{ row.check.doorwayIn | length }}
             ({{ row.check.passes ? (row.check.spareIn | length) + ' to spare' : (-row.check.spareIn | length) + ' too tall: build it in the room or split it into more sections' }}).
             @for (c of row.cautions; track c.code) {
               <span class="caution" [class.danger]="c.severity === 'danger'">{{ c.message }}</span>
@@ -58,7 +50,6 @@ import { checkDoorway } from './calculations/doorway';
   `,
   styles: `
     :host { display: block; }
-    .doorway { width: 340px; max-width: 100%; margin-bottom: 8px; }
     .racks { margin: 8px 0 0; padding: 0; list-style: none; }
     li { display: grid; grid-template-columns: 150px 1fr; gap: 12px; padding: 8px 0; border-top: 1px solid var(--mat-sys-outline-variant); }
     .verdict { display: inline-flex; gap: 6px; align-items: flex-start; font-weight: 500; color: var(--mat-sys-tertiary); }
@@ -69,19 +60,14 @@ import { checkDoorway } from './calculations/doorway';
 })
 export class DoorwayCheck {
   readonly racks = input.required<OrderRack[]>();
+  /** The customer's doorway, inches; null: the plan's own clearance. */
+  readonly doorwayIn = input<number | null>(null);
 
   private readonly rackResults = inject(RackResults);
-  protected readonly doorwayText = signal('');
   protected readonly results = remote(
     () => this.racks(),
     (racks) => (racks.length ? forkJoin(racks.map((r) => this.rackResults.resultFor(r.spec ?? {}))) : of<RackPlanResponse[]>([])),
   );
-  protected readonly doorwayIn = computed(() => {
-    const text = this.doorwayText().trim();
-    const n = text ? parseInches(text) : null;
-    return n !== null && n > 0 ? n : null;
-  });
-  protected readonly doorwayProblem = computed(() => (this.doorwayText().trim() && this.doorwayIn() === null ? 'Enter inches, e.g. 79 1/2' : null));
   protected readonly rows = computed(() => {
     const results = this.results.value() ?? [];
     return results.map((result, i) => {
@@ -94,8 +80,4 @@ export class DoorwayCheck {
       };
     });
   });
-
-  protected value(event: Event): string {
-    return (event.target as HTMLInputElement).value;
-  }
 }

@@ -2,7 +2,7 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { AuthSession, Role } from '@tubwright/kit';
-import type { Order } from '../core/orders-types';
+import type { Order, Payment } from '../core/orders-types';
 import { OrderDetail } from './order-detail';
 
 const order: Order = {
@@ -20,6 +20,8 @@ const order: Order = {
   deliveryMethod: 'pickup',
   deliveryDate: null,
   deliveryAddress: '',
+  doorwayHeightIn: null,
+  refundedCents: 0,
   notes: '',
   createdAt: '2026-12-02T10:00:00.000Z',
   updatedAt: '2026-12-02T12:00:00.000Z',
@@ -79,5 +81,54 @@ describe('OrderDetail', () => {
     request.flush({ ...order, status: 'picked_up', nextStages: ['closed'], updatedAt: '2026-12-02T13:00:00.000Z' });
     fixture.detectChanges();
     expect(element.textContent).toContain('Order O-2026-0005 is now picked up.');
+  });
+
+  it('sends a payment link and shows it, with a way to copy and open it, while the customer has not paid', async () => {
+    const { fixture, http, buttons } = open('sales');
+    http.expectOne('/api/v1/orders/5/payments').flush({ items: [] });
+    http.expectOne('/api/v1/orders/5/refunds').flush({ items: [] });
+    http.expectOne((r) => r.url === '/api/v1/invoices').flush({ items: [], total: 0, limit: 10, offset: 0 });
+    fixture.detectChanges();
+    expect(buttons()).toContain('linkSend payment link');
+    const element = fixture.nativeElement as HTMLElement;
+    Array.from(element.querySelectorAll('button')).find((b) => b.textContent!.includes('Send payment link'))!.click();
+    const asked = http.expectOne((r) => r.url === '/api/v1/orders/5/payments' && r.method === 'POST');
+    expect(asked.request.body).toEqual({ kind: 'balance', via: 'checkout' });
+    const url = 'http://127.0.0.1:4310/checkout/cs_test_a1';
+    const pending: Payment = {
+      id: 8, orderId: 5, kind: 'balance', amountCents: 115120, currency: 'usd', status: 'pending', via: 'checkout', providerId: 'cs_test_a1',
+      checkoutUrl: url, refundedCents: 0, failureMessage: null, paidAt: null, createdAt: '2026-12-02T13:00:00.000Z',
+    };
+    asked.flush(pending);
+    fixture.detectChanges();
+    http.expectOne((r) => r.url === '/api/v1/orders/5/payments' && r.method === 'GET').flush({ items: [pending] });
+    fixture.detectChanges();
+    await fixture.whenStable();
+    expect(element.textContent).toContain('A payment page for the $1,151.20 balance is ready: send the link to Greta Lindqvist.');
+    expect(element.querySelector<HTMLInputElement>('tw-payment-link input')!.value).toBe(url);
+    expect(element.querySelector<HTMLAnchorElement>('tw-payment-link a')!.href).toBe(url);
+    expect(buttons()).toContain('content_copyCopy link');
+    expect(buttons().some((b) => b.includes('Send payment link'))).toBe(false);
+  });
+
+  it('offers the refund when an order with money paid is cancelled', async () => {
+    const { fixture, http } = open('sales');
+    http.expectOne('/api/v1/orders/5/payments').flush({ items: [] });
+    // 100.00 of the deposit is already on its way back
+    http.expectOne('/api/v1/orders/5/refunds').flush({
+      items: [{ id: 1, orderId: 5, paymentId: 2, amountCents: 10000, currency: 'usd', status: 'pending', providerId: 're_1', reason: 'Late', refundedAt: null, createdBy: 'sales@demo.tubwright.test', createdAt: '2026-12-02T12:30:00.000Z' }],
+    });
+    http.expectOne((r) => r.url === '/api/v1/invoices').flush({ items: [], total: 0, limit: 10, offset: 0 });
+    fixture.detectChanges();
+    const element = fixture.nativeElement as HTMLElement;
+    expect(element.textContent).toContain('Refunds');
+    expect(element.textContent).toContain('Late');
+    Array.from(element.querySelectorAll('button')).find((b) => b.textContent!.trim() === 'Cancel order…')!.click();
+    fixture.detectChanges();
+    await fixture.whenStable();
+    const dialog = element.querySelector('tw-refund-dialog')!;
+    expect(dialog.textContent).toContain('Cancel order O-2026-0005?');
+    // 1,151.21 paid less 100.00 under way
+    expect(dialog.querySelector<HTMLInputElement>('input')!.value).toBe('1051.21');
   });
 });

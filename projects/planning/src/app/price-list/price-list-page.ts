@@ -2,12 +2,11 @@ import { ChangeDetectionStrategy, Component, DestroyRef, computed, inject, signa
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { MatButton } from '@angular/material/button';
 import { MatProgressBar } from '@angular/material/progress-bar';
-import { AuthSession, ErrorBanner, PageHeader, describeApiError, toApiError } from '@tubwright/kit';
-import { forkJoin } from 'rxjs';
+import { AuthSession, ErrorBanner, PageHeader, ShellLink, describeApiError, toApiError } from '@tubwright/kit';
 import { formatMoney } from '../shared/money';
 import { PlanApi } from '../shared/plan-api';
-import type { PriceListItem, ShopMaterial } from '../shared/plan-types';
-import { showLength, trimDecimals } from '../shared/plan-units';
+import type { PriceListItem } from '../shared/plan-types';
+import { trimDecimals } from '../shared/plan-units';
 
 const CATEGORY_LABELS: Record<PriceListItem['category'], string> = {
   sheet: 'Sheets',
@@ -22,11 +21,11 @@ const CATEGORY_LABELS: Record<PriceListItem['category'], string> = {
 /** Prices that are not money: minutes and percent. */
 const isAmount = (item: PriceListItem) => item.unit !== 'minutes' && item.unit !== 'percent' && !item.key.startsWith('labor.minutes') && item.key !== 'margin-percent';
 
-/** The shop's price list and materials; the owner edits prices, everyone else reads them. */
+/** The shop's price list; the owner edits prices, everyone else reads them. Materials have a page of their own. */
 @Component({
   selector: 'tw-price-list-page',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [MatButton, MatProgressBar, ErrorBanner, PageHeader],
+  imports: [MatButton, MatProgressBar, ErrorBanner, PageHeader, ShellLink],
   templateUrl: './price-list-page.html',
   styleUrl: './price-list-page.scss',
 })
@@ -37,7 +36,6 @@ export class PriceListPage {
   protected readonly canEdit = computed(() => this.auth.role() === 'owner');
 
   protected readonly items = signal<PriceListItem[]>([]);
-  protected readonly materials = signal<ShopMaterial[]>([]);
   protected readonly loading = signal(true);
   protected readonly failure = signal<string | null>(null);
   protected readonly saving = signal(false);
@@ -65,12 +63,12 @@ export class PriceListPage {
   protected load(): void {
     this.loading.set(true);
     this.failure.set(null);
-    forkJoin({ items: this.api.priceList(), materials: this.api.materials() })
+    this.api
+      .priceList()
       .pipe(takeUntilDestroyed(this.destroyRef))
       .subscribe({
-        next: ({ items, materials }) => {
+        next: (items) => {
           this.items.set(items);
-          this.materials.set(materials);
           this.loading.set(false);
         },
         error: (error: unknown) => {
@@ -131,13 +129,5 @@ export class PriceListPage {
   protected discard(): void {
     this.edits.set({});
     this.fieldErrors.set({});
-  }
-
-  protected inches(value: number): string {
-    return showLength(value, 'in');
-  }
-
-  protected money(value: number): string {
-    return formatMoney(value);
   }
 }

@@ -1,18 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { DIMENSION_LABELS } from '../shared/dimension-labels';
 import type { RackPlanResponse } from '../shared/plan-types';
 import { showLength } from '../shared/plan-units';
-
-const LABELS: Array<[keyof RackPlanResponse['dimensions'], string, string]> = [
-  ['levelOpening', 'Level opening', 'tub height + lid gap'],
-  ['interiorShelfLength', 'Interior shelf', 'between the side panels'],
-  ['outerShelfLength', 'Top and bottom panels', 'cover both side panels'],
-  ['depth', 'Panel depth', 'tub length + depth play'],
-  ['carcassHeight', 'Carcass height', 'without the base'],
-  ['baseHeight', 'Base height', '2x4 on edge + casters'],
-  ['overallHeight', 'Overall height', 'on its casters'],
-  ['overallWidth', 'Overall width', ''],
-  ['overallDepth', 'Overall depth', ''],
-];
 
 /** The numbers a builder checks first, in fractions of an inch to 1/16 or in millimetres. */
 @Component({
@@ -55,7 +44,7 @@ export class KeyDimensions {
 
   protected readonly rows = computed(() => {
     const r = this.result();
-    return LABELS.map(([key, label, hint]) => ({ key, label, hint, value: showLength(r.dimensions[key], r.unit) }));
+    return DIMENSION_LABELS.map(([key, label, hint]) => ({ key, label, hint, value: showLength(r.dimensions[key], r.unit) }));
   });
 
   protected length(value: number): string {

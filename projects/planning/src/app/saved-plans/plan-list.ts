@@ -3,6 +3,7 @@ import { MatButton } from '@angular/material/button';
 import { MatSortModule, Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
 import { AuthSession, DataTable, ErrorBanner, ListQuery, PageHeader, describeApiError, fromSortParam, pagedList, toSortParam } from '@tubwright/kit';
+import { comparePath } from '../planning-routes';
 import { formatMoney } from '../shared/money';
 import { PlanApi } from '../shared/plan-api';
 import type { PlanListItem } from '../shared/plan-types';
@@ -35,6 +36,29 @@ export class PlanList {
   protected readonly columns = ['name', 'tubModelName', 'rack', 'sheets', 'total', 'checks', 'updatedAt', 'actions'];
   protected readonly busyId = signal<number | null>(null);
   protected readonly failure = signal<string | null>(null);
+
+  /** Plans ticked for comparing, in the order ticked (the first is A); kept while the list is searched or paged. */
+  protected readonly picked = signal<Array<{ id: number; name: string }>>([]);
+
+  protected isPicked(plan: PlanListItem): boolean {
+    return this.picked().some((p) => p.id === plan.id);
+  }
+
+  protected pick(plan: PlanListItem, on: boolean): void {
+    this.picked.update((list) => {
+      const rest = list.filter((p) => p.id !== plan.id);
+      return on && rest.length < 2 ? [...rest, { id: plan.id, name: plan.name }] : rest;
+    });
+  }
+
+  protected unpick(id: number): void {
+    this.picked.update((list) => list.filter((p) => p.id !== id));
+  }
+
+  protected compare(): void {
+    const [a, b] = this.picked();
+    if (a && b) this.open.emit(comparePath(a.id, b.id));
+  }
 
   protected sortBy(sort: Sort): void {
     this.queryChange.emit({ query: { ...this.query(), sort: toSortParam(sort.active, sort.direction), offset: 0 }, archived: this.archived() });

@@ -2,10 +2,10 @@ import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { API_BASE, ApiClient, ListQuery, Page, toApiError } from '@tubwright/kit';
 import { Observable, catchError, map, throwError } from 'rxjs';
-import { TubModel } from '../tub-models/tub-model';
-import { Plan, PlanListItem, PlanVersionListItem, PriceListItem, RackPlanRequest, RackPlanResponse, ShopMaterial } from './plan-types';
+import { TubModel, TubModelPhoto } from '../tub-models/tub-model';
+import { MaterialInput, Plan, PlanComparison, PlanListItem, PlanVersionListItem, PriceListItem, RackPlanRequest, RackPlanResponse, ShopMaterial } from './plan-types';
 
-export type TubModelInput = Omit<TubModel, 'id'>;
+export type TubModelInput = Omit<TubModel, 'id' | 'photoId'>;
 
 export interface PlanWrite {
   name?: string;
@@ -59,6 +59,11 @@ export class PlanApi {
     return this.api.get(`/plans/${id}/versions/${version}`);
   }
 
+  /** Two plans side by side, every length in plan A's unit. */
+  compare(a: number, b: number): Observable<PlanComparison> {
+    return this.api.get<PlanComparison>(`/plans/${a}/compare/${b}`);
+  }
+
   priceList(): Observable<PriceListItem[]> {
     return this.api.get<{ items: PriceListItem[] }>('/price-list').pipe(map((r) => r.items));
   }
@@ -72,6 +77,11 @@ export class PlanApi {
 
   materials(): Observable<ShopMaterial[]> {
     return this.api.get<{ items: ShopMaterial[] }>('/materials').pipe(map((r) => r.items));
+  }
+
+  /** Replaces the whole material (the API's PUT); its price is mirrored to the price list. */
+  putMaterial(key: string, body: MaterialInput): Observable<ShopMaterial> {
+    return this.http.put<ShopMaterial>(`${API_BASE}/materials/${encodeURIComponent(key)}`, body).pipe(catchError((e: unknown) => throwError(() => toApiError(e))));
   }
 
   /** Tub models for the editor's picker: the first 200 by name is every shop's whole list. */
@@ -90,6 +100,18 @@ export class PlanApi {
   /** Retiring is the API's soft delete: plans sized for the tub keep their numbers. */
   retireTubModel(id: number): Observable<void> {
     return this.http.delete<void>(`${API_BASE}/tub-models/${id}`).pipe(catchError((e: unknown) => throwError(() => toApiError(e))));
+  }
+
+  /** Uploads (or replaces) a tub model's photo, with the small copy lists show when there is one. */
+  uploadTubModelPhoto(id: number, photo: Blob, photoName: string, thumbnail: Blob | null): Observable<TubModelPhoto> {
+    const body = new FormData();
+    body.append('photo', photo, photoName);
+    if (thumbnail) body.append('thumbnail', thumbnail, 'thumbnail.jpg');
+    return this.api.post<TubModelPhoto>(`/tub-models/${id}/photo`, body);
+  }
+
+  removeTubModelPhoto(id: number): Observable<void> {
+    return this.http.delete<void>(`${API_BASE}/tub-models/${id}/photo`).pipe(catchError((e: unknown) => throwError(() => toApiError(e))));
   }
 
   /** A file behind the bearer token (build sheet, cut list), as a Blob to hand to the browser. */

@@ -1,7 +1,9 @@
 import type { z } from 'zod';
 import type {
   Plan as PlanSchema,
+  PlanComparison as PlanComparisonSchema,
   PlanListItem as PlanListItemSchema,
+  PutMaterialRequest as PutMaterialRequestSchema,
   PlanVersionListItem as PlanVersionListItemSchema,
   PriceListItem as PriceListItemSchema,
   ShopMaterial as ShopMaterialSchema,
@@ -15,6 +17,8 @@ export type PlanListItem = z.output<typeof PlanListItemSchema>;
 export type PlanVersionListItem = z.output<typeof PlanVersionListItemSchema>;
 export type PriceListItem = z.output<typeof PriceListItemSchema>;
 export type ShopMaterial = z.output<typeof ShopMaterialSchema>;
+export type MaterialInput = z.input<typeof PutMaterialRequestSchema>;
+export type PlanComparison = z.output<typeof PlanComparisonSchema>;
 export type RackPart = RackPlanResponse['parts'][number];
 export type RackCheck = RackPlanResponse['checks'][number];
 export type CuttingPlan = NonNullable<RackPlanResponse['cutting']>;

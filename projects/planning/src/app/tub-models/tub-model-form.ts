@@ -10,6 +10,7 @@ import { errorText } from '../plan-editor/plan-form';
 import { PlanApi } from '../shared/plan-api';
 import { LengthUnit, convertLengthText, lengthText, readLength, readNumber } from '../shared/plan-units';
 import { TubModel } from './tub-model';
+import { TubModelPhotoPanel } from './tub-model-photo-panel';
 
 type SizeField = 'lengthIn' | 'widthIn' | 'heightIn';
 const SIZE_FIELDS: SizeField[] = ['lengthIn', 'widthIn', 'heightIn'];
@@ -43,7 +44,7 @@ const volumeRule: ValidatorFn = (control) => {
 @Component({
   selector: 'tw-tub-model-form',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatFormFieldModule, MatInput, MatButton, ErrorBanner],
+  imports: [ReactiveFormsModule, MatFormFieldModule, MatInput, MatButton, ErrorBanner, TubModelPhotoPanel],
   templateUrl: './tub-model-form.html',
   styleUrl: './tub-model-form.scss',
 })
@@ -159,6 +160,10 @@ export class TubModelForm {
           this.failure.set(describeApiError(error));
         },
       });
+  }
+
+  protected photoChanged(photoId: number | null): void {
+    this.model.update((m) => (m ? { ...m, photoId } : m));
   }
 
   protected cancel(): void {

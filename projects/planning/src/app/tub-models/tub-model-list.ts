@@ -4,12 +4,13 @@ import { MatSortModule, Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
 import { ApiClient, AuthSession, DataTable, LengthPipe, ListQuery, PageHeader, fromSortParam, pagedList, toSortParam } from '@tubwright/kit';
 import { TubModel } from './tub-model';
+import { TubPhoto } from './tub-photo';
 
 /** The shop's tub models: the outside sizes every rack is planned around. */
 @Component({
   selector: 'tw-tub-model-list',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [MatTableModule, MatSortModule, MatButton, DataTable, PageHeader, LengthPipe],
+  imports: [MatTableModule, MatSortModule, MatButton, DataTable, PageHeader, LengthPipe, TubPhoto],
   templateUrl: './tub-model-list.html',
   styleUrl: './tub-model-list.scss',
 })
@@ -22,7 +23,7 @@ export class TubModelList {
   private readonly api = inject(ApiClient);
   protected readonly list = pagedList(this.query, (q) => this.api.list<TubModel>('/tub-models', q));
   protected readonly sort = computed(() => fromSortParam(this.query().sort));
-  protected readonly columns = ['name', 'maker', 'lengthIn', 'widthIn', 'heightIn', 'volumeQt', 'actions'];
+  protected readonly columns = ['photo', 'name', 'maker', 'lengthIn', 'widthIn', 'heightIn', 'volumeQt', 'actions'];
   private readonly auth = inject(AuthSession);
   protected readonly canWrite = computed(() => ['owner', 'builder'].includes(this.auth.role() ?? ''));
 

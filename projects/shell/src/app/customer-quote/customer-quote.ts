@@ -1,6 +1,6 @@
-import { CurrencyPipe, DatePipe } from '@angular/common';
+import { CurrencyPipe, DatePipe, DOCUMENT } from '@angular/common';
 import { HttpClient } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, inject, input, signal } from '@angular/core';
 import { FormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatProgressSpinner } from '@angular/material/progress-spinner';
@@ -20,9 +20,20 @@ interface CustomerQuote {
   totalCents: number;
   depositCents: number;
   orderNumber: string | null;
+  orderStatus: string | null;
+  paidCents: number;
+  depositDueNowCents: number;
 }
 
-/** `/quote/:token`: the page a customer opens from the quote's e-mail, with no account, to accept or decline. */
+/** After the provider's page sends the customer back, its event may take a moment: ask again this often, this many times. */
+const CONFIRM_POLL_MS = 1500;
+const CONFIRM_POLLS = 20;
+
+/**
+ * `/quote/:token`: the page a customer opens from the quote's e-mail, with no account, to accept or
+ * decline, and then to pay the deposit on the payment provider's page. Coming back from there
+ * (`?payment=received`) proves nothing: the page waits for the shop to hear from the provider.
+ */
 @Component({
   selector: 'tw-customer-quote',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -32,8 +43,15 @@ interface CustomerQuote {
 })
 export class CustomerQuotePage {
   readonly token = input.required<string>();
+  /** Set by the payment provider's return links: `received` or `cancelled`. */
+  readonly payment = input<string | undefined>();
 
   private readonly http = inject(HttpClient);
+  private readonly document = inject(DOCUMENT);
+  private pollTimer: ReturnType<typeof setTimeout> | undefined;
+  protected readonly confirming = signal(false);
+  /** How long to wait between asks while confirming (shorter in tests). */
+  protected pollMs = CONFIRM_POLL_MS;
   protected readonly quote = signal<CustomerQuote | null>(null);
   protected readonly failure = signal<string | null>(null);
   protected readonly busy = signal(false);
@@ -45,8 +63,38 @@ export class CustomerQuotePage {
   private readonly url = computed(() => `${API_BASE}/quote-links/${encodeURIComponent(this.token())}`);
 
   constructor() {
-    effect(() => {
-      this.http.get<CustomerQuote>(this.url()).subscribe({ next: (q) => this.quote.set(q), error: (e: unknown) => this.failure.set(describeApiError(toApiError(e))) });
+    effect(() => this.load(this.payment() === 'received' ? CONFIRM_POLLS : 0));
+    inject(DestroyRef).onDestroy(() => clearTimeout(this.pollTimer));
+  }
+
+  private load(pollsLeft: number): void {
+    this.http.get<CustomerQuote>(this.url()).subscribe({
+      next: (q) => {
+        this.quote.set(q);
+        const waiting = pollsLeft > 0 && q.depositDueNowCents > 0;
+        this.confirming.set(waiting);
+        if (waiting) this.pollTimer = setTimeout(() => this.load(pollsLeft - 1), this.pollMs);
+      },
+      error: (e: unknown) => this.failure.set(describeApiError(toApiError(e))),
+    });
+  }
+
+  /** Leaves the console for the provider's page (a seam for tests). */
+  protected leaveFor(url: string): void {
+    this.document.location.assign(url);
+  }
+
+  /** Opens the payment provider's page for the deposit still due. */
+  protected payDeposit(): void {
+    if (this.busy()) return;
+    this.busy.set(true);
+    this.failure.set(null);
+    this.http.post<{ checkoutUrl: string }>(`${this.url()}/pay`, {}).subscribe({
+      next: ({ checkoutUrl }) => this.leaveFor(checkoutUrl),
+      error: (e: unknown) => {
+        this.busy.set(false);
+        this.failure.set(describeApiError(toApiError(e)));
+      },
     });
   }
 

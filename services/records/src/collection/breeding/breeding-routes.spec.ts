@@ -31,7 +31,7 @@ describe('traits and genes', () => {
     const list = await request(ctx.app).get('/api/v1/traits?mode=recessive&q=cinder').set(asRole('sales'));
     expect(list.body.items.map((t: { name: string }) => t.name)).toEqual(['cinder']);
     expect((await request(ctx.app).patch(`/api/v1/traits/${tide}`).set(keeper()).send({ notes: 'n' })).body.notes).toBe('n');
-    expect((await request(ctx.app).patch(`/api/v1/traits/${tide}`).set(keeper()).send({ mode: 'recessive' })).status).toBe(400);
+    expect((await request(ctx.app).patch(`/api/v1/traits/${tide}`).set(keeper()).send({ mode: 'codominant' })).status).toBe(400);
     expect((await request(ctx.app).get('/api/v1/traits/99999').set(keeper())).status).toBe(404);
     expect((await request(ctx.app).post('/api/v1/traits').set(asRole('sales')).send({ name: 'y', mode: 'recessive' })).status).toBe(403);
     expect((await request(ctx.app).get('/api/v1/traits').set(asRole('builder'))).status).toBe(403);

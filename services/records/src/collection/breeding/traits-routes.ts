@@ -58,7 +58,14 @@ export function traitsRoutes(db: Knex): Router {
     json(async (req) => {
       const { id } = parseOrThrow(IdParams, req.params);
       const body = parseOrThrow(UpdateTraitRequest, req.body);
-      await find(id);
+      const trait = await find(id);
+      if (body.name !== undefined && (await db('traits').whereRaw('lower(name) = lower(?)', [body.name]).whereNot({ id }).first())) {
+        throw new ConflictError(`The trait ${body.name} is on the list already.`, 'name');
+      }
+      // Recessive genes are het/visual, the others single/super: a carried trait keeps its family.
+      if (body.mode !== undefined && (body.mode === 'recessive') !== (trait.mode === 'recessive') && (await db('animal_genes').where({ trait_id: id }).first())) {
+        throw new ConflictError(`Animals carry ${trait.name} as ${trait.mode}; change their genes first, or add a new trait.`, 'mode');
+      }
       await db('traits').where({ id }).update({ ...body, updated_at: nowIso() });
       await audit(db, req.identity, 'update', 'trait', id, body);
       return find(id);
