@@ -7,6 +7,7 @@ import * as apiKeys from './20261202_005_api_keys.js';
 import * as sessions from './20261202_006_sessions.js';
 import * as orderDetails from './20261202_007_order_details.js';
 import * as tubModelPhotos from './20261202_008_tub_model_photos.js';
+import * as animalSales from './20261202_009_animal_sales.js';
 
 /**
  * Migrations are listed here rather than read from the folder, so tsx, vitest and compiled
@@ -21,6 +22,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202_006_sessions': sessions,
   '20261202_007_order_details': orderDetails,
   '20261202_008_tub_model_photos': tubModelPhotos,
+  '20261202_009_animal_sales': animalSales,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

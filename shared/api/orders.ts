@@ -41,6 +41,7 @@ export const QuoteLineInput = z
     description: z.string().trim().min(1, 'is required').max(300).optional().describe('Text on the quote; a rack line describes itself when omitted.'),
     planId: z.number().int().positive().optional().describe('A saved plan to price (rack lines).'),
     spec: z.record(z.string(), z.unknown()).optional().describe('A rack-plan request to price through the calculator (rack lines); see POST /api/v1/calc/rack-plan.'),
+    animalId: z.number().int().positive().optional().describe('Item lines: an animal from the collection offered for sale (quantity 1); handing the order over marks it sold.'),
     quantity: z.number().int('must be a whole number').min(1, 'must be at least 1').max(10_000).default(1).describe('How many (hours for labor).'),
     unitPriceCents: z
       .number()
@@ -57,6 +58,8 @@ export const QuoteLineInput = z
       return;
     }
     if (line.planId !== undefined || line.spec !== undefined) ctx.addIssue({ code: 'custom', path: ['kind'], message: 'only rack lines take planId or spec' });
+    if (line.animalId !== undefined && line.kind !== 'item') ctx.addIssue({ code: 'custom', path: ['animalId'], message: 'only item lines sell an animal' });
+    if (line.animalId !== undefined && line.quantity !== 1) ctx.addIssue({ code: 'custom', path: ['quantity'], message: 'must be 1 for an animal' });
     if (line.description === undefined) ctx.addIssue({ code: 'custom', path: ['description'], message: 'is required' });
     if (line.unitPriceCents === undefined && line.kind !== 'delivery') ctx.addIssue({ code: 'custom', path: ['unitPriceCents'], message: 'is required' });
   });
@@ -91,6 +94,7 @@ export const QuoteLine = z.object({
   description: z.string(),
   planId: z.number().int().nullable(),
   spec: z.record(z.string(), z.unknown()).nullable().describe('The rack-plan request this line was priced from.'),
+  animalId: z.number().int().nullable().describe('The animal this line sells, if any.'),
   quantity: z.number().int(),
   unitPriceCents: Cents('Price of one'),
   amountCents: Cents('quantity x unit price; negative for discounts'),

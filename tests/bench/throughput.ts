@@ -11,15 +11,17 @@ export interface Throughput {
   non2xx: number;
 }
 
+type AutocannonOptions = Parameters<typeof autocannon>[0];
+
 /** A bounded autocannon run on loopback: fixed duration and connections, stops by itself. */
-export async function measure(name: string, url: string, body: unknown, headers: Record<string, string> = {}, seconds = 8): Promise<Throughput> {
+async function run(name: string, url: string, headers: Record<string, string>, seconds: number, body: Partial<AutocannonOptions>): Promise<Throughput> {
   const result = await autocannon({
     url,
     method: 'POST',
     connections: 16,
     duration: seconds,
     headers: { 'content-type': 'application/json', ...headers },
-    body: JSON.stringify(body),
+    ...body,
   });
   return {
     name,
@@ -30,24 +32,15 @@ export async function measure(name: string, url: string, body: unknown, headers:
   };
 }
 
-/** As measure, but every request carries a body of its own (so no answer can be reused). */
-export async function measureDistinct(name: string, url: string, bodyFor: (n: number) => unknown, headers: Record<string, string> = {}, seconds = 8): Promise<Throughput> {
+/** The same body on every request. */
+export function measure(name: string, url: string, body: unknown, headers: Record<string, string> = {}, seconds = 8): Promise<Throughput> {
+  return run(name, url, headers, seconds, { body: JSON.stringify(body) });
+}
+
+/** Every request a body of its own (so no answer can be reused). */
+export function measureDistinct(name: string, url: string, bodyFor: (n: number) => unknown, headers: Record<string, string> = {}, seconds = 8): Promise<Throughput> {
   let n = 0;
-  const result = await autocannon({
-    url,
-    method: 'POST',
-    connections: 16,
-    duration: seconds,
-    headers: { 'content-type': 'application/json', ...headers },
-    requests: [{ setupRequest: (req) => ({ ...req, body: JSON.stringify(bodyFor(n++)) }) }],
-  });
-  return {
-    name,
-    requestsPerSecond: Math.round(result.requests.average),
-    p99Ms: result.latency.p99,
-    errors: result.errors,
-    non2xx: result.non2xx,
-  };
+  return run(name, url, headers, seconds, { requests: [{ setupRequest: (req) => ({ ...req, body: JSON.stringify(bodyFor(n++)) }) }] });
 }
 
 /** The median of several runs of one measurement: requests per second and p99 each taken as their median. */

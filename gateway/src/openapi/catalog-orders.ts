@@ -69,6 +69,11 @@ documentRoutes(
     success: { status: 201, schema: Payment, description: 'A pending payment: with `checkoutUrl` (via checkout) or the client secret (via card)' }, errors: [404, 409, 422, 502],
     description: `With \`via: "checkout"\` creates a hosted checkout session with the provider's SDK and answers its page (\`checkoutUrl\`) for the customer, who comes back to their quote page afterwards; with \`via: "card"\` creates a payment intent for a card taken in the shop. Either way the payment turns succeeded only when the provider's signed event arrives, never from a browser's redirect. ${IDEMPOTENT}`,
   },
+  {
+    method: 'post', path: '/api/v1/payments/:id/cancel', tag: 'payments', summary: 'Withdraw a payment that is not paid', roles: SALES, params: IdParams,
+    success: { status: 200, schema: Payment, description: 'The payment as the provider\'s events left it (canceled)' }, errors: [404, 409, 502],
+    description: 'Closes the checkout page (via checkout) or cancels the payment intent (via card) at the provider, so the order can be paid another way. 409 for a payment that succeeded or is already canceled.',
+  },
   { method: 'get', path: '/api/v1/orders/:id/refunds', tag: 'payments', summary: 'Refunds of an order', roles: SALES, params: IdParams, success: { status: 200, schema: RefundList, description: 'Oldest first' }, errors: [404] },
   {
     method: 'post', path: '/api/v1/orders/:id/refunds', tag: 'payments', summary: 'Give money back through the payment provider', roles: SALES, params: IdParams, body: CreateRefundRequest,

@@ -11,6 +11,7 @@ export * from './lib/api/page';
 export * from './lib/list/list-query';
 export * from './lib/list/paged-list';
 export * from './lib/units/length';
+export * from './lib/units/material-names';
 export * from './lib/ui/page-header';
 export * from './lib/ui/empty-state';
 export * from './lib/ui/error-banner';

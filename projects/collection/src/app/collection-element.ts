@@ -36,7 +36,11 @@ import { TraitList } from './traits/trait-list';
         <tw-animal-list [query]="v.query" [filters]="v.filters" (stateChange)="showList($event)" />
       }
       @case ('animal') {
-        <tw-animal-detail [animalId]="v.id" />
+        @defer {
+          <tw-animal-detail [animalId]="v.id" />
+        } @placeholder {
+          <p class="muted" role="status">Loading…</p>
+        }
       }
       @case ('animal-new') {
         @defer {
@@ -63,25 +67,53 @@ import { TraitList } from './traits/trait-list';
         <tw-rack-list />
       }
       @case ('rack') {
-        <tw-rack-map [rackId]="v.id" />
+        @defer {
+          <tw-rack-map [rackId]="v.id" />
+        } @placeholder {
+          <p class="muted" role="status">Loading…</p>
+        }
       }
       @case ('labels') {
-        <tw-tub-labels [rackId]="v.id" />
+        @defer {
+          <tw-tub-labels [rackId]="v.id" />
+        } @placeholder {
+          <p class="muted" role="status">Loading…</p>
+        }
       }
       @case ('due') {
-        <tw-due-list [date]="v.date" />
+        @defer {
+          <tw-due-list [date]="v.date" />
+        } @placeholder {
+          <p class="muted" role="status">Loading…</p>
+        }
       }
       @case ('feeding') {
-        <tw-feeding-day [rackId]="v.rackId" />
+        @defer {
+          <tw-feeding-day [rackId]="v.rackId" />
+        } @placeholder {
+          <p class="muted" role="status">Loading…</p>
+        }
       }
       @case ('breeding') {
-        <tw-breeding-page />
+        @defer {
+          <tw-breeding-page />
+        } @placeholder {
+          <p class="muted" role="status">Loading…</p>
+        }
       }
       @case ('pairing') {
-        <tw-pairing-detail [pairingId]="v.id" />
+        @defer {
+          <tw-pairing-detail [pairingId]="v.id" />
+        } @placeholder {
+          <p class="muted" role="status">Loading…</p>
+        }
       }
       @case ('environment') {
-        <tw-environment-view [rackId]="v.rackId" />
+        @defer {
+          <tw-environment-view [rackId]="v.rackId" />
+        } @placeholder {
+          <p class="muted" role="status">Loading…</p>
+        }
       }
       @case ('traits') {
         @defer {

@@ -60,19 +60,35 @@ const SECTION_LABELS: Record<Section, { label: string; icon: string }> = {
           <tw-customer-list [query]="v.query" (queryChange)="showList('customers', $event)" />
         }
         @case ('customer') {
-          <tw-customer-detail [id]="v.id" />
+          @defer {
+            <tw-customer-detail [id]="v.id" />
+          } @placeholder {
+            <p class="tw-muted" role="status">Loading…</p>
+          }
         }
         @case ('customer-form') {
-          <tw-customer-form [id]="v.id" />
+          @defer {
+            <tw-customer-form [id]="v.id" />
+          } @placeholder {
+            <p class="tw-muted" role="status">Loading…</p>
+          }
         }
         @case ('quotes') {
           <tw-quote-list [query]="v.query" [status]="v.status" (queryChange)="showList('quotes', $event, v.status)" />
         }
         @case ('quote') {
-          <tw-quote-detail [id]="v.id" />
+          @defer {
+            <tw-quote-detail [id]="v.id" />
+          } @placeholder {
+            <p class="tw-muted" role="status">Loading…</p>
+          }
         }
         @case ('quote-form') {
-          <tw-quote-form [id]="v.id" [customerId]="v.customerId" />
+          @defer {
+            <tw-quote-form [id]="v.id" [customerId]="v.customerId" />
+          } @placeholder {
+            <p class="tw-muted" role="status">Loading…</p>
+          }
         }
         @case ('orders') {
           <tw-order-list [query]="v.query" [status]="v.status" (queryChange)="showList('orders', $event, v.status)" />
@@ -84,16 +100,32 @@ const SECTION_LABELS: Record<Section, { label: string; icon: string }> = {
           <tw-production-board />
         }
         @case ('cutting') {
-          <tw-batch-cutting [orderIds]="v.orderIds" />
+          @defer {
+            <tw-batch-cutting [orderIds]="v.orderIds" />
+          } @placeholder {
+            <p class="tw-muted" role="status">Loading…</p>
+          }
         }
         @case ('stock') {
-          <tw-stock-page [kind]="v.kind" />
+          @defer {
+            <tw-stock-page [kind]="v.kind" />
+          } @placeholder {
+            <p class="tw-muted" role="status">Loading…</p>
+          }
         }
         @case ('stock-item') {
-          <tw-stock-form [id]="v.id" [startKind]="v.kind" [startOffcut]="v.offcut" />
+          @defer {
+            <tw-stock-form [id]="v.id" [startKind]="v.kind" [startOffcut]="v.offcut" />
+          } @placeholder {
+            <p class="tw-muted" role="status">Loading…</p>
+          }
         }
         @case ('settings') {
-          <tw-order-settings-page />
+          @defer {
+            <tw-order-settings-page />
+          } @placeholder {
+            <p class="tw-muted" role="status">Loading…</p>
+          }
         }
         @default {
           <tw-empty-state icon="explore_off" heading="Orders has no page here" [hint]="'Nothing lives at “' + missingRoute(v) + '”.'">

@@ -1,13 +1,21 @@
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { TestBed } from '@angular/core/testing';
+import { DeferBlockState, TestBed, type ComponentFixture } from '@angular/core/testing';
 import { AuthSession, NavigateDetail, provideTubwrightIcons } from '@tubwright/kit';
 import { PlanningElement } from './planning-element';
 
+/** Renders the page behind the element's @defer block at once (the browser does it when idle). */
+async function renderDeferred(fixture: ComponentFixture<unknown>): Promise<void> {
+  for (const block of await fixture.getDeferBlocks()) await block.render(DeferBlockState.Complete);
+  await fixture.whenStable();
+}
+
 describe('PlanningElement', () => {
-  beforeEach(() => {
+  beforeEach(async () => {
     localStorage.clear();
-    TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting(), provideTubwrightIcons()] });
+    TestBed.configureTestingModule({ imports: [PlanningElement], providers: [provideHttpClient(), provideHttpClientTesting(), provideTubwrightIcons()] });
+    // Pages behind @defer are resolved before the element is made.
+    await TestBed.compileComponents();
   });
 
   it('lists tub models for the path it is given and takes over the shell session', async () => {
@@ -45,11 +53,13 @@ describe('PlanningElement', () => {
     const current = () => (fixture.nativeElement as HTMLElement).querySelector('nav a[aria-current="page"]')?.textContent?.trim();
     fixture.componentRef.setInput('path', 'compare/4/7');
     await fixture.whenStable();
+    await renderDeferred(fixture);
     backend.expectOne('/api/v1/plans/4/compare/7');
     expect(current()).toBe('Saved plans');
 
     fixture.componentRef.setInput('path', 'materials');
     await fixture.whenStable();
+    await renderDeferred(fixture);
     backend.expectOne('/api/v1/materials');
     expect(current()).toBe('Materials');
   });

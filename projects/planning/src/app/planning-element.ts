@@ -39,19 +39,35 @@ const SECTIONS: Array<{ id: PlanningSection; path: string; label: string }> = [
         <tw-plan-editor [planId]="v.id" [tubModelId]="v.tubModelId" [navigate]="navigate" />
       }
       @case ('compare') {
-        <tw-plan-compare [a]="v.a" [b]="v.b" [navigate]="navigate" />
+        @defer {
+          <tw-plan-compare [a]="v.a" [b]="v.b" [navigate]="navigate" />
+        } @placeholder {
+          <p role="status">Loading…</p>
+        }
       }
       @case ('tub-models') {
         <tw-tub-model-list [query]="v.query" (queryChange)="showTubModels($event)" (open)="navigate($event)" />
       }
       @case ('tub-model') {
-        <tw-tub-model-form [tubModelId]="v.id" [navigate]="navigate" />
+        @defer {
+          <tw-tub-model-form [tubModelId]="v.id" [navigate]="navigate" />
+        } @placeholder {
+          <p role="status">Loading…</p>
+        }
       }
       @case ('price-list') {
-        <tw-price-list-page />
+        @defer {
+          <tw-price-list-page />
+        } @placeholder {
+          <p role="status">Loading…</p>
+        }
       }
       @case ('materials') {
-        <tw-materials-page />
+        @defer {
+          <tw-materials-page />
+        } @placeholder {
+          <p role="status">Loading…</p>
+        }
       }
       @default {
         <tw-empty-state icon="explore_off" heading="Planning has no page here" [hint]="'Nothing lives at “' + path() + '”.'">

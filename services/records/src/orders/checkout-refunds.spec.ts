@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { recordsTestApp, TEST_INTERNAL_SECRET } from '../test-support.js';
-import { acceptedOrder, asCustomerLink, builder, owner, postWebhook, sales, webhookForwarder } from './orders-test-helpers.js';
+import { TEST_INTERNAL_SECRET, type recordsTestApp } from '../test-support.js';
+import { acceptedOrder, asCustomerLink, builder, owner, paymentsTestStack, postWebhook, sales } from './orders-test-helpers.js';
 import { quoteLinkToken } from './quote-link-token.js';
 
 /**
@@ -10,19 +10,14 @@ import { quoteLinkToken } from './quote-link-token.js';
  * from the stand-in's signed events, delivered through a forwarder playing the gateway.
  */
 let ctx: Awaited<ReturnType<typeof recordsTestApp>>;
-let forwarder: Awaited<ReturnType<typeof webhookForwarder>>;
+let stack: Awaited<ReturnType<typeof paymentsTestStack>>;
+let forwarder: Awaited<ReturnType<typeof paymentsTestStack>>['forwarder'];
 
 beforeAll(async () => {
-  forwarder = await webhookForwarder();
-  ctx = await recordsTestApp({ seed: true, webhookUrl: forwarder.url });
-  forwarder.deliverTo(ctx.app);
-  // 50 % deposit, no tax: an invented shop's settings.
-  await request(ctx.app).patch('/api/v1/order-settings').set(owner()).send({ taxRatePercent: 0, depositPercent: 50 });
+  stack = await paymentsTestStack();
+  ({ ctx, forwarder } = stack);
 });
-afterAll(async () => {
-  await ctx.close();
-  await forwarder.close();
-});
+afterAll(() => stack.close());
 
 const orderOf = async (id: number) => (await request(ctx.app).get(`/api/v1/orders/${id}`).set(sales())).body;
 /** Presses Pay on the stand-in's page with one of its test cards, as the customer's browser would. */
@@ -62,6 +57,19 @@ describe('a deposit paid on the provider\'s checkout page', () => {
     expect((await postWebhook(ctx.app, completed.payload, completed.signature)).body).toEqual({ received: true, duplicate: true });
     expect((await payOnPage(created.body.checkoutUrl, '4242424242424242')).status).toBe(409);
     expect((await orderOf(order.id)).paidCents).toBe(60000);
+  });
+
+  it('can be withdrawn before it is paid, after which its page takes no payment', async () => {
+    const { order } = await acceptedOrder(ctx.app);
+    const created = await request(ctx.app).post(`/api/v1/orders/${order.id}/payments`).set(sales()).send({ via: 'checkout' });
+    const withdrawn = await request(ctx.app).post(`/api/v1/payments/${created.body.id}/cancel`).set(sales());
+    expect([withdrawn.status, withdrawn.body.status]).toEqual([200, 'canceled']);
+    expect((await payOnPage(created.body.checkoutUrl, '4242424242424242')).status).toBe(409);
+    expect((await orderOf(order.id)).paidCents).toBe(0);
+    expect((await request(ctx.app).post(`/api/v1/payments/${created.body.id}/cancel`).set(sales())).status).toBe(409);
+    const card = await request(ctx.app).post(`/api/v1/orders/${order.id}/payments`).set(sales()).send({ via: 'card' });
+    expect((await request(ctx.app).post(`/api/v1/payments/${card.body.id}/cancel`).set(owner())).body.status).toBe('canceled');
+    expect((await request(ctx.app).post(`/api/v1/payments/${card.body.id}/cancel`).set(builder())).status).toBe(403);
   });
 
   it('is not confirmed from the console: the customer pays it on the page', async () => {

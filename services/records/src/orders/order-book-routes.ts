@@ -9,6 +9,7 @@ import { parseOrThrow } from '../../../common/src/validate.js';
 import type { RecordsDeps } from '../app.js';
 import { audit } from '../audit/audit-log.js';
 import { nowIso } from '../db/knex.js';
+import { removeFromTub } from '../collection/racks/racks-store.js';
 import { itemToRow } from '../lib/resource-routes.js';
 import { listPage } from '../lib/list.js';
 import { idempotent } from './idempotency.js';
@@ -32,6 +33,16 @@ async function settleReservations(trx: Knex, orderId: number, stage: OrderStatus
     for (const r of held) await trx('stock_items').where({ id: r.stock_item_id }).update({ quantity: trx.raw('CASE WHEN quantity > ? THEN quantity - ? ELSE 0 END', [r.quantity, r.quantity]), updated_at: nowIso() });
   }
   await trx('stock_reservations').where({ order_id: orderId }).delete();
+}
+
+/** Animals sold on the order leave the collection when it is handed over: sold, off the for-sale list, out of their tubs (history kept). */
+async function handOverAnimals(trx: Knex, quoteId: number): Promise<void> {
+  const lines = (await trx('quote_lines').where({ quote_id: quoteId }).whereNotNull('animal_id').select('animal_id')) as { animal_id: number }[];
+  const now = nowIso();
+  for (const { animal_id: animalId } of lines) {
+    await trx('animals').where({ id: animalId }).update({ status: 'sold', for_sale: false, updated_at: now });
+    await removeFromTub(trx, animalId, now);
+  }
 }
 
 export function orderBookRoutes(deps: RecordsDeps): Router {
@@ -101,6 +112,7 @@ export function orderBookRoutes(deps: RecordsDeps): Router {
         }
         await enterStage(trx, id, stage, actorOf(req), note);
         await settleReservations(trx, id, stage);
+        if (stage === 'delivered' || stage === 'picked_up') await handOverAnimals(trx, order.quoteId);
       });
       await audit(db, req.identity, 'stage', 'order', id, { stage });
       const order = await findOrder(db, id);

@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { recordsTestApp } from '../test-support.js';
-import { acceptedOrder, builder, sales } from './orders-test-helpers.js';
+import { acceptedOrder, builder, owner, sales } from './orders-test-helpers.js';
 
 let ctx: Awaited<ReturnType<typeof recordsTestApp>>;
 beforeAll(async () => {
@@ -36,5 +36,33 @@ describe("the customer's doorway on an order", () => {
       expect([res.status, res.body.error.field]).toEqual([400, 'doorwayHeightIn']);
     }
     expect((await request(ctx.app).patch(`/api/v1/orders/${order.id}`).set(sales()).send({ doorwayHeightIn: null })).body.doorwayHeightIn).toBeNull();
+  });
+});
+
+describe('an animal sold on an order', () => {
+  it('is named on its quote line and leaves the collection as sold when the order is handed over', async () => {
+    const animal = (await ctx.db('animals').where({ for_sale: true, status: 'active' }).whereNull('deleted_at').first()) as { id: number; code: string };
+    expect(animal).toBeDefined();
+    const { depositPercent } = (await request(ctx.app).get('/api/v1/order-settings').set(owner())).body;
+    await request(ctx.app).patch('/api/v1/order-settings').set(owner()).send({ depositPercent: 0 });
+    const { quote, order } = await acceptedOrder(ctx.app, [{ kind: 'item', description: `Hatchling ${animal.code}`, animalId: animal.id, quantity: 1, unitPriceCents: 15000 }]);
+    await request(ctx.app).patch('/api/v1/order-settings').set(owner()).send({ depositPercent });
+    expect(quote.lines[0].animalId).toBe(animal.id);
+    for (const stage of ['cutting', 'assembly', 'wiring', 'testing', 'ready']) {
+      await request(ctx.app).post(`/api/v1/orders/${order.id}/stage`).set(owner()).send({ stage }).expect(200);
+    }
+    expect((await ctx.db('animals').where({ id: animal.id }).first()).status).toBe('active');
+    await request(ctx.app).post(`/api/v1/orders/${order.id}/stage`).set(sales()).send({ stage: 'picked_up' }).expect(200);
+    const after = await ctx.db('animals').where({ id: animal.id }).first();
+    expect([after.status, Boolean(after.for_sale)]).toEqual(['sold', false]);
+    expect(await ctx.db('placements').where({ animal_id: animal.id }).whereNull('removed_at').first()).toBeUndefined();
+  });
+
+  it('is refused when the animal is not offered for sale, and only on item lines', async () => {
+    const kept = (await ctx.db('animals').where({ for_sale: false }).first()) as { id: number };
+    const notForSale = await request(ctx.app).post('/api/v1/quotes').set(sales()).send({ customerId: 1, lines: [{ kind: 'item', description: 'x', animalId: kept.id, unitPriceCents: 100 }] });
+    expect([notForSale.status, notForSale.body.error.field]).toEqual([422, 'lines[0].animalId']);
+    const onDelivery = await request(ctx.app).post('/api/v1/quotes').set(sales()).send({ customerId: 1, lines: [{ kind: 'delivery', description: 'x', animalId: kept.id }] });
+    expect([onDelivery.status, onDelivery.body.error.field]).toEqual([400, 'lines[0].animalId']);
   });
 });

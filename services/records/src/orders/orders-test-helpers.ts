@@ -4,7 +4,7 @@ import type { Express } from 'express';
 import request from 'supertest';
 import Stripe from 'stripe';
 import { IDENTITY_HEADER, signIdentity } from '../../../common/src/internal-identity.js';
-import { asRole, TEST_INTERNAL_SECRET } from '../test-support.js';
+import { asRole, recordsTestApp, TEST_INTERNAL_SECRET } from '../test-support.js';
 
 /** The header the gateway adds when it forwards the provider's webhook. */
 export function asWebhookSystem(): Record<string, string> {
@@ -77,5 +77,24 @@ export async function webhookForwarder() {
       target = app;
     },
     close: () => new Promise((r) => server.close(r)),
+  };
+}
+
+/**
+ * A seeded records app whose payment stand-in delivers its signed events back to it through a
+ * forwarder, with an invented shop's 50 % deposit and no tax.
+ */
+export async function paymentsTestStack() {
+  const forwarder = await webhookForwarder();
+  const ctx = await recordsTestApp({ seed: true, webhookUrl: forwarder.url });
+  forwarder.deliverTo(ctx.app);
+  await request(ctx.app).patch('/api/v1/order-settings').set(owner()).send({ taxRatePercent: 0, depositPercent: 50 });
+  return {
+    ctx,
+    forwarder,
+    close: async () => {
+      await ctx.close();
+      await forwarder.close();
+    },
   };
 }

@@ -1,28 +1,22 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { recordsTestApp } from '../test-support.js';
-import { acceptedOrder, asWebhookSystem, builder, owner, postWebhook, sales, signedEvent, webhookForwarder } from './orders-test-helpers.js';
+import type { recordsTestApp } from '../test-support.js';
+import { acceptedOrder, asWebhookSystem, builder, owner, paymentsTestStack, postWebhook, sales, signedEvent } from './orders-test-helpers.js';
 
 /**
  * End to end: the provider SDK talks to the stand-in, the stand-in signs and delivers its events to
  * a small forwarder playing the gateway, which posts them to the records app with the system identity.
  */
 let ctx: Awaited<ReturnType<typeof recordsTestApp>>;
-let forwarder: Awaited<ReturnType<typeof webhookForwarder>>;
+let stack: Awaited<ReturnType<typeof paymentsTestStack>>;
 let delivered: { payload: string; signature: string }[];
 
 beforeAll(async () => {
-  forwarder = await webhookForwarder();
-  delivered = forwarder.delivered;
-  ctx = await recordsTestApp({ seed: true, webhookUrl: forwarder.url });
-  forwarder.deliverTo(ctx.app);
-  // 50 % deposit, no tax: an invented shop's settings.
-  await request(ctx.app).patch('/api/v1/order-settings').set(owner()).send({ taxRatePercent: 0, depositPercent: 50 });
+  stack = await paymentsTestStack();
+  ({ ctx } = stack);
+  delivered = stack.forwarder.delivered;
 });
-afterAll(async () => {
-  await ctx.close();
-  await forwarder.close();
-});
+afterAll(() => stack.close());
 
 describe('deposits through the provider SDK and its signed webhook', () => {
   let orderId = 0;

@@ -219,5 +219,25 @@ export function paymentsRoutes(deps: RecordsDeps): Router {
     }),
   );
 
+  // A payment asked for and not wanted after all (a link sent by mistake, a card the customer will not use):
+  // the provider closes it and its signed event marks it canceled, so the order can be paid another way.
+  router.post(
+    '/api/v1/payments/:id/cancel',
+    allow(...PAYMENT_ROLES),
+    json(async (req) => {
+      const { id } = parseOrThrow(IdParams, req.params);
+      const payment = await findPayment(db, id);
+      if (payment.status !== 'pending' && payment.status !== 'failed') throw new ConflictError(`Payment ${id} is ${payment.status}; only a pending one can be withdrawn.`);
+      try {
+        if (payment.via === 'checkout') await deps.payments.client.checkout.sessions.expire(payment.provider_id);
+        else await deps.payments.client.paymentIntents.cancel(payment.provider_id);
+      } catch (err) {
+        throw providerError(err);
+      }
+      await audit(db, req.identity, 'cancel', 'payment', id, { via: payment.via });
+      return toPayment(await findPayment(db, id));
+    }),
+  );
+
   return router;
 }

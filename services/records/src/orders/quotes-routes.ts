@@ -1,4 +1,5 @@
 import { Router, type Request } from 'express';
+import type { Knex } from 'knex';
 import { IdParams } from '../../../../shared/api/common.js';
 import { AcceptQuoteRequest, CreateQuoteRequest, QuoteListQuery, UpdateQuoteRequest, type QuoteLineInput } from '../../../../shared/api/orders.js';
 import { json } from '../../../common/src/async-handler.js';
@@ -26,6 +27,13 @@ export function actorOf(req: Request): string {
   return who ? who.email ?? `${who.kind}:${who.sub}` : 'system';
 }
 
+/** An animal may be sold on a quote only while the keepers offer it for sale. */
+async function assertForSale(db: Knex, animalId: number, field: string): Promise<void> {
+  const animal = (await db('animals').where({ id: animalId }).whereNull('deleted_at').first('code', 'status', 'for_sale')) as { code: string; status: string; for_sale: unknown } | undefined;
+  if (!animal) throw new UnprocessableError(`No animal with id ${animalId} in the collection.`, field);
+  if (!animal.for_sale || animal.status === 'sold' || animal.status === 'deceased') throw new UnprocessableError(`${animal.code} is not offered for sale.`, field);
+}
+
 /** Prices every line: rack lines through the saved plan or the calculator, delivery from the settings. */
 async function resolveLines(deps: RecordsDeps, req: Request, lines: QuoteLineInput[], deliveryFeeCents: number): Promise<ResolvedLine[]> {
   const resolved: ResolvedLine[] = [];
@@ -34,7 +42,8 @@ async function resolveLines(deps: RecordsDeps, req: Request, lines: QuoteLineInp
       const priced = await priceRack(deps.db, deps.calculator, req.identity, line, `lines[${i}]`);
       resolved.push({ kind: 'rack', description: line.description ?? priced.description, planId: line.planId ?? null, spec: priced.spec, quantity: line.quantity, unitPriceCents: line.unitPriceCents ?? priced.unitPriceCents });
     } else {
-      resolved.push({ kind: line.kind, description: line.description!, planId: null, spec: null, quantity: line.quantity, unitPriceCents: line.unitPriceCents ?? deliveryFeeCents });
+      if (line.animalId !== undefined) await assertForSale(deps.db, line.animalId, `lines[${i}].animalId`);
+      resolved.push({ kind: line.kind, description: line.description!, planId: null, spec: null, animalId: line.animalId ?? null, quantity: line.quantity, unitPriceCents: line.unitPriceCents ?? deliveryFeeCents });
     }
   }
   return resolved;

@@ -16,6 +16,8 @@ export interface ResolvedLine {
   description: string;
   planId: number | null;
   spec: Record<string, unknown> | null;
+  /** Item lines that sell an animal from the collection. */
+  animalId?: number | null;
   quantity: number;
   unitPriceCents: number;
 }
@@ -76,6 +78,7 @@ export function toQuoteLine(row: Record<string, any>): QuoteLineItem {
     description: row.description,
     planId: row.plan_id ?? null,
     spec: row.spec_json ? JSON.parse(row.spec_json) : null,
+    animalId: row.animal_id ?? null,
     quantity: row.quantity,
     unitPriceCents: row.unit_price_cents,
     amountCents: row.amount_cents,
@@ -116,6 +119,7 @@ async function writeLines(trx: Knex, quoteId: number, lines: readonly ResolvedLi
       description: line.description,
       plan_id: line.planId,
       spec_json: line.spec ? JSON.stringify(line.spec) : null,
+      animal_id: line.animalId ?? null,
       quantity: line.quantity,
       unit_price_cents: line.unitPriceCents,
       amount_cents: lineAmountCents(line),

@@ -1,14 +1,14 @@
-import { formatLength } from '@tubwright/kit';
+import { BOARD_MATERIALS, SHEET_MATERIALS, baseMaterialName, formatLength } from '@tubwright/kit';
 import type { StockItem, StockKind } from './orders-types';
 
 /*
  * Mirrors of the API's stock lists (shared/api/stock.ts, shared/api/rack-plan.ts) as plain
- * values: importing the schemas would put zod into the bundle. The spec checks they agree.
+ * values, the material lists from the kit: importing the schemas would put zod into the bundle.
+ * The spec checks they agree.
  */
 
 export const STOCK_KINDS: readonly StockKind[] = ['sheet', 'board', 'hardware'];
-export const SHEET_MATERIALS = ['pvc-rigid', 'pvc-expanded', 'melamine-particleboard', 'plywood'] as const;
-export const BOARD_MATERIALS = ['lumber-2x4'] as const;
+export { BOARD_MATERIALS, SHEET_MATERIALS };
 
 /** Materials a sheet or a board may be; hardware is named freely. */
 export function materialsFor(kind: StockKind): readonly string[] {
@@ -21,18 +21,10 @@ export const KIND_LABELS: Record<StockKind, { one: string; many: string }> = {
   hardware: { one: 'Hardware', many: 'Hardware' },
 };
 
-const NAMES: Record<string, string> = {
-  'pvc-rigid': 'Rigid PVC',
-  'pvc-expanded': 'Foamed PVC',
-  'melamine-particleboard': 'Melamine particleboard',
-  plywood: 'Plywood',
-  'lumber-2x4': '2x4 lumber',
-};
-
 /** `pvc-rigid` → `Rigid PVC`; a cutting key `pvc-rigid@0.5` → `Rigid PVC, 1/2 in`; hardware names stay as they are. */
 export function materialName(key: string): string {
-  const [material = key, thickness] = key.split('@');
-  const name = NAMES[material] ?? material;
+  const thickness = key.split('@')[1];
+  const name = baseMaterialName(key);
   return thickness ? `${name}, ${formatLength(Number(thickness))}` : name;
 }
 

@@ -111,6 +111,26 @@ describe('OrderDetail', () => {
     expect(buttons().some((b) => b.includes('Send payment link'))).toBe(false);
   });
 
+  it('withdraws an unpaid payment link at the provider', async () => {
+    const { fixture, http, buttons } = open('sales');
+    const pending: Payment = {
+      id: 8, orderId: 5, kind: 'balance', amountCents: 115120, currency: 'usd', status: 'pending', via: 'checkout', providerId: 'cs_test_a1',
+      checkoutUrl: 'http://127.0.0.1:4310/checkout/cs_test_a1', refundedCents: 0, failureMessage: null, paidAt: null, createdAt: '2026-12-02T13:00:00.000Z',
+    };
+    http.expectOne('/api/v1/orders/5/payments').flush({ items: [pending] });
+    http.expectOne('/api/v1/orders/5/refunds').flush({ items: [] });
+    http.expectOne((r) => r.url === '/api/v1/invoices').flush({ items: [], total: 0, limit: 10, offset: 0 });
+    fixture.detectChanges();
+    expect(buttons()).toContain('Withdraw the link');
+    const element = fixture.nativeElement as HTMLElement;
+    Array.from(element.querySelectorAll('button')).find((b) => b.textContent!.trim() === 'Withdraw the link')!.click();
+    const asked = http.expectOne((r) => r.url === '/api/v1/payments/8/cancel' && r.method === 'POST');
+    asked.flush({ ...pending, status: 'canceled' });
+    fixture.detectChanges();
+    await fixture.whenStable();
+    expect(element.textContent).toContain('The payment was withdrawn; nothing was charged.');
+  });
+
   it('offers the refund when an order with money paid is cancelled', async () => {
     const { fixture, http } = open('sales');
     http.expectOne('/api/v1/orders/5/payments').flush({ items: [] });

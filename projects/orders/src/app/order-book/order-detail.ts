@@ -195,6 +195,16 @@ export class OrderDetail {
     });
   }
 
+  /** Closes an unpaid payment at the provider (a link sent by mistake), so the order can be paid another way. */
+  protected withdraw(payment: Payment): void {
+    this.notice.set(null);
+    this.payAction.run(this.api.post<Payment>(`/payments/${payment.id}/cancel`, {}), (closed) => {
+      this.order.reload();
+      this.payments.reload();
+      this.notice.set(closed.status === 'canceled' ? 'The payment was withdrawn; nothing was charged.' : `The payment is ${closed.status}.`);
+    });
+  }
+
   /** Reads the order again now, and for a little while, for a provider's event still on its way. */
   protected checkAgain(): void {
     this.order.reload();

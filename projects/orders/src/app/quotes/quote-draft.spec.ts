@@ -1,5 +1,5 @@
 import type { PlanListItem } from '../core/orders-types';
-import { effectivePriceCents, lineProblem, planLine, plainLine, specLine, toLineInput } from './quote-draft';
+import { animalLine, effectivePriceCents, fromQuoteLine, lineProblem, planLine, plainLine, specLine, toLineInput } from './quote-draft';
 
 const plan = {
   id: 4,
@@ -39,5 +39,13 @@ describe('quote draft lines', () => {
     expect(lineProblem(plainLine('item', 'Thermostat', 0, '10'))).toMatch(/at least 1/);
     expect(lineProblem(plainLine('labor', 'Assembly on site', 3, '-40'))).toMatch(/amount/);
     expect(lineProblem(plainLine('discount', 'Repeat customer', 1, '25'))).toBeNull();
+  });
+
+  it('names the animal an animal line sells, and keeps it when a saved quote is edited again', () => {
+    const line = animalLine({ id: 12, code: 'BP-2026-012', name: '', sex: 'female', species: 'ball python', morph: 'amber het dusk' } as Parameters<typeof animalLine>[0], 15000);
+    const body = toLineInput(line);
+    expect(body).toMatchObject({ kind: 'item', quantity: 1, animalId: 12, unitPriceCents: 15000 });
+    const saved = { id: 1, position: 1, kind: 'item' as const, description: String(body['description']), planId: null, spec: null, animalId: 12, quantity: 1, unitPriceCents: 15000, amountCents: 15000 };
+    expect(toLineInput(fromQuoteLine(saved))).toEqual(body);
   });
 });

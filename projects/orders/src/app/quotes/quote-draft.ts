@@ -103,10 +103,10 @@ export function fromQuoteLine(line: QuoteLine): DraftLine {
   return draft({
     kind: line.kind,
     description: line.description,
-    origin: line.kind === 'rack' ? (line.planId ? `Saved plan #${line.planId}` : 'Rack from a spec') : '',
+    origin: line.kind === 'rack' ? (line.planId ? `Saved plan #${line.planId}` : 'Rack from a spec') : line.animalId ? 'Animal for sale' : '',
     planId: line.planId,
     spec: line.planId ? null : line.spec,
-    animalId: null,
+    animalId: line.animalId,
     quantity: line.quantity,
     priceText: centsToInput(line.unitPriceCents),
     suggestedCents: line.unitPriceCents,
@@ -136,6 +136,8 @@ export function toLineInput(line: DraftLine): Record<string, unknown> {
     if (line.planId !== null) body['planId'] = line.planId;
     else body['spec'] = line.spec;
   }
+  // An animal's line names it, so handing the order over marks it sold in the collection.
+  if (line.animalId !== null) body['animalId'] = line.animalId;
   const typed = line.priceText.trim() ? parseMoneyToCents(line.priceText) : null;
   if (typed !== null) body['unitPriceCents'] = typed;
   return body;
