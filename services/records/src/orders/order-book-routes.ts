@@ -113,6 +113,8 @@ export function orderBookRoutes(deps: RecordsDeps): Router {
         await enterStage(trx, id, stage, actorOf(req), note);
         await settleReservations(trx, id, stage);
         if (stage === 'delivered' || stage === 'picked_up') await handOverAnimals(trx, order.quoteId);
+        // A cancelled order's unpaid invoice keeps its number (no gaps) and is voided.
+        if (stage === 'cancelled') await trx('invoices').where({ order_id: id, status: 'open' }).update({ status: 'void', updated_at: nowIso() });
       });
       await audit(db, req.identity, 'stage', 'order', id, { stage });
       const order = await findOrder(db, id);

@@ -66,3 +66,14 @@ describe('an animal sold on an order', () => {
     expect([onDelivery.status, onDelivery.body.error.field]).toEqual([400, 'lines[0].animalId']);
   });
 });
+
+describe('cancelling an invoiced order', () => {
+  it('voids its open invoice, which keeps its number', async () => {
+    const { order } = await acceptedOrder(ctx.app);
+    const invoice = await request(ctx.app).post(`/api/v1/orders/${order.id}/invoices`).set(sales());
+    expect([invoice.status, invoice.body.status]).toEqual([201, 'open']);
+    await request(ctx.app).post(`/api/v1/orders/${order.id}/stage`).set(sales()).send({ stage: 'cancelled' }).expect(200);
+    const after = await request(ctx.app).get(`/api/v1/invoices/${invoice.body.id}`).set(sales());
+    expect([after.body.status, after.body.number]).toEqual(['void', invoice.body.number]);
+  });
+});
