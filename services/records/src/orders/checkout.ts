@@ -1,3 +1,4 @@
+import type { PAYMENT_KINDS } from '../../../../shared/api/orders.js';
 import { ConflictError } from '../../../common/src/errors.js';
 import type { RecordsDeps } from '../app.js';
 import { insertId, nowIso } from '../db/knex.js';
@@ -5,7 +6,7 @@ import type { OrderItem } from './orders-store.js';
 import { providerError } from './provider-error.js';
 import { quoteLinkToken, quoteLinkUrl } from './quote-link-token.js';
 
-export type PaymentKind = 'deposit' | 'balance';
+type PaymentKind = (typeof PAYMENT_KINDS)[number];
 
 /** What a payment of this kind would ask now; 409 when nothing is due. */
 export function amountDue(order: OrderItem, kind: PaymentKind): number {

@@ -1,7 +1,6 @@
 import { Router } from 'express';
 import { IdParams } from '../../../../shared/api/common.js';
-import type { Knex } from 'knex';
-import { CreateOrderRequest, OrderListQuery, StageChangeRequest, UpdateOrderRequest, type OrderStatus } from '../../../../shared/api/orders.js';
+import { CreateOrderRequest, OrderListQuery, StageChangeRequest, UpdateOrderRequest } from '../../../../shared/api/orders.js';
 import { json } from '../../../common/src/async-handler.js';
 import { ApiError, ForbiddenError } from '../../../common/src/errors.js';
 import { allow } from '../../../common/src/roles.js';
@@ -9,7 +8,6 @@ import { parseOrThrow } from '../../../common/src/validate.js';
 import type { RecordsDeps } from '../app.js';
 import { audit } from '../audit/audit-log.js';
 import { nowIso } from '../db/knex.js';
-import { removeFromTub } from '../collection/racks/racks-store.js';
 import { itemToRow } from '../lib/resource-routes.js';
 import { listPage } from '../lib/list.js';
 import { idempotent } from './idempotency.js';
@@ -22,29 +20,6 @@ export const ORDER_READ_ROLES = ['owner', 'sales', 'builder'] as const;
 export const ORDER_WRITE_ROLES = ['owner', 'sales'] as const;
 
 /** The order book and the production board: orders, their delivery details and stage changes. */
-/**
- * Stock set aside for an order stops being held once the order is finished: a cancelled order's
- * pieces go back to free stock; a handed-over order used them, so they leave the stock count.
- */
-async function settleReservations(trx: Knex, orderId: number, stage: OrderStatus): Promise<void> {
-  if (stage !== 'cancelled' && stage !== 'delivered' && stage !== 'picked_up') return;
-  const held = (await trx('stock_reservations').where({ order_id: orderId })) as { stock_item_id: number; quantity: number }[];
-  if (stage !== 'cancelled') {
-    for (const r of held) await trx('stock_items').where({ id: r.stock_item_id }).update({ quantity: trx.raw('CASE WHEN quantity > ? THEN quantity - ? ELSE 0 END', [r.quantity, r.quantity]), updated_at: nowIso() });
-  }
-  await trx('stock_reservations').where({ order_id: orderId }).delete();
-}
-
-/** Animals sold on the order leave the collection when it is handed over: sold, off the for-sale list, out of their tubs (history kept). */
-async function handOverAnimals(trx: Knex, quoteId: number): Promise<void> {
-  const lines = (await trx('quote_lines').where({ quote_id: quoteId }).whereNotNull('animal_id').select('animal_id')) as { animal_id: number }[];
-  const now = nowIso();
-  for (const { animal_id: animalId } of lines) {
-    await trx('animals').where({ id: animalId }).update({ status: 'sold', for_sale: false, updated_at: now });
-    await removeFromTub(trx, animalId, now);
-  }
-}
-
 export function orderBookRoutes(deps: RecordsDeps): Router {
   const { db } = deps;
   const router = Router();
@@ -111,10 +86,6 @@ export function orderBookRoutes(deps: RecordsDeps): Router {
           throw new ApiError(409, 'balance_due', `Order ${order.number} still owes ${refusal.balanceCents} cents; take the balance before closing it.`, 'stage', { balanceCents: refusal.balanceCents });
         }
         await enterStage(trx, id, stage, actorOf(req), note);
-        await settleReservations(trx, id, stage);
-        if (stage === 'delivered' || stage === 'picked_up') await handOverAnimals(trx, order.quoteId);
-        // A cancelled order's unpaid invoice keeps its number (no gaps) and is voided.
-        if (stage === 'cancelled') await trx('invoices').where({ order_id: id, status: 'open' }).update({ status: 'void', updated_at: nowIso() });
       });
       await audit(db, req.identity, 'stage', 'order', id, { stage });
       const order = await findOrder(db, id);

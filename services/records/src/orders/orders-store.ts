@@ -6,6 +6,7 @@ import { insertId, nowIso } from '../db/knex.js';
 import { nextNumber } from './numbering.js';
 import { nextStages } from './order-flow.js';
 import { todayIso } from './quotes-store.js';
+import { applyStageEffects } from './stage-effects.js';
 
 export type OrderItem = z.output<typeof Order>;
 type OrderSummaryItem = z.output<typeof OrderSummary>;
@@ -99,6 +100,7 @@ export async function enterStage(trx: Knex, orderId: number, stage: OrderStatus,
   await trx('order_stages').where({ order_id: orderId }).whereNull('finished_at').update({ finished_at: at, updated_at: at });
   await trx('order_stages').insert({ order_id: orderId, stage, started_at: at, by, note, created_at: at, updated_at: at });
   await trx('orders').where({ id: orderId }).update({ status: stage, updated_at: at });
+  await applyStageEffects(trx, orderId, stage);
 }
 
 /** Accepting a sent, still valid quote makes its order, waiting for the deposit (or already paid when nothing is due). */

@@ -20,7 +20,7 @@ import { actorOf } from './quotes-routes.js';
 export const PAYMENT_ROLES = ['owner', 'sales'] as const;
 const WEBHOOK_ACTOR = 'payments-webhook';
 
-export async function findPayment(db: Knex, id: number) {
+async function findPayment(db: Knex, id: number) {
   const row = await db('payments').where({ id }).first();
   if (!row) throw new NotFoundError(`No payment with id ${id}.`);
   return row as Record<string, any>;

@@ -11,13 +11,14 @@ import type { Clutch, Pairing } from '../core/collection-types';
 import { formatDay } from '../core/format';
 import { ShellLink } from '../core/shell-link';
 import { PAIRING_STATUS_LABELS, seasonOf } from './breeding-text';
+import { ClutchTable } from './clutch-table';
 import { openHatchDialog } from './open-hatch-dialog';
 
 /** Pairings of the season and the clutches in the incubator; plan a new pairing here. */
 @Component({
   selector: 'tw-breeding-page',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [MatButton, MatAnchor, MatIcon, MatFormFieldModule, MatInput, ErrorBanner, PageHeader, ShellLink],
+  imports: [MatButton, MatAnchor, MatIcon, MatFormFieldModule, MatInput, ErrorBanner, PageHeader, ShellLink, ClutchTable],
   template: `
     <tw-page-header heading="Breeding" subheading="Pairings, what they can produce, and clutches with their expected hatch.">
       <a mat-button twLink="traits"><mat-icon>genetics</mat-icon>Trait list</a>
@@ -93,37 +94,7 @@ import { openHatchDialog } from './open-hatch-dialog';
       <h2 id="clutches-heading">Clutches</h2>
       @if (clutches.hasValue()) {
         @if (clutches.value().items.length) {
-          <div class="table-scroll">
-            <table class="simple-table" aria-label="Clutches">
-              <thead>
-                <tr><th scope="col">Pairing</th><th scope="col">Laid</th><th scope="col" class="tw-num">Fertile</th><th scope="col" class="tw-num">Slugs</th><th scope="col">Incubation</th><th scope="col">Expected hatch</th><th scope="col">Hatched</th></tr>
-              </thead>
-              <tbody>
-                @for (c of clutches.value().items; track c.id) {
-                  <tr>
-                    <td><a class="link" [twLink]="'breeding/pairings/' + c.pairingId">{{ pairingName(c.pairingId) }}</a></td>
-                    <td>{{ formatDay(c.laidOn) }}</td>
-                    <td class="tw-num">{{ c.fertileEggs }}</td>
-                    <td class="tw-num">{{ c.slugs }}</td>
-                    <td>{{ c.incubationTempF !== null ? c.incubationTempF + ' °F' : '—' }}{{ c.humidityPct !== null ? ', ' + c.humidityPct + ' %' : '' }}</td>
-                    <td>
-                      {{ formatDay(c.expectedHatchFrom) }} – {{ formatDay(c.expectedHatchTo) }}
-                      @if (c.incubationWarning) {
-                        <br /><span class="status status-warn">{{ c.incubationWarning }}</span>
-                      }
-                    </td>
-                    <td>
-                      @if (c.hatchedOn) {
-                        {{ formatDay(c.hatchedOn) }} ({{ c.hatchlingCount }})
-                      } @else {
-                        <button mat-stroked-button type="button" (click)="recordHatch(c)" [attr.aria-label]="'Record the hatch of ' + pairingName(c.pairingId) + ', laid ' + formatDay(c.laidOn)">Record hatch</button>
-                      }
-                    </td>
-                  </tr>
-                }
-              </tbody>
-            </table>
-          </div>
+          <tw-clutch-table [clutches]="clutches.value().items" label="Clutches" [pairingName]="pairingLabel" (hatch)="recordHatch($event)" />
         } @else {
           <p class="none">No clutches yet. Record one from its pairing.</p>
         }
@@ -157,6 +128,7 @@ export class BreedingPage {
   protected readonly createError = signal<string | null>(null);
   protected readonly statusLabels = PAIRING_STATUS_LABELS;
   protected readonly formatDay = formatDay;
+  protected readonly pairingLabel = (id: number) => this.pairingName(id);
   protected readonly errorText = (error: unknown) => describeApiError(error);
 
   protected lastObservation(p: Pairing): string {

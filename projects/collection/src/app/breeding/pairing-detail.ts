@@ -10,13 +10,14 @@ import type { Clutch, ObservationKind, Pairing, PairingOutcomesView, PairingStat
 import { formatDay, formatPercent, todayUtc } from '../core/format';
 import { ShellLink } from '../core/shell-link';
 import { PAIRING_STATUSES, PAIRING_STATUS_LABELS, expectedHatchPreview } from './breeding-text';
+import { ClutchTable } from './clutch-table';
 import { openHatchDialog } from './open-hatch-dialog';
 
 /** One pairing: its progress, what it can produce (exact genetics), and its clutches. */
 @Component({
   selector: 'tw-pairing-detail',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [MatButton, MatIcon, MatFormFieldModule, MatInput, ErrorBanner, ShellLink],
+  imports: [MatButton, MatIcon, MatFormFieldModule, MatInput, ErrorBanner, ShellLink, ClutchTable],
   templateUrl: './pairing-detail.html',
   styles: `
     :host { display: block; }
